@@ -1,0 +1,38 @@
+import type PgBoss from 'pg-boss';
+import { createOriginalImporter } from '../features/originals/import-original';
+import { createOriginalsRepository } from '../features/originals/originals.repository';
+import { runUnpack } from '../features/originals/unpack/run-unpack';
+import type { Runtime } from '../runtime';
+import { queueNames, type ImportJobData } from './queue';
+
+// Runs import jobs: in the web process in development, in `npm run worker` processes in production.
+export async function startImportWorkers(runtime: Runtime): Promise<() => Promise<void>> {
+  const repo = createOriginalsRepository(runtime.db.db);
+  const importOriginal = createOriginalImporter({ db: runtime.db.db, repo, storage: runtime.storage, runUnpack });
+  const ids: string[] = [];
+  for (let i = 0; i < runtime.config.IMPORT_CONCURRENCY; i++) {
+    const id = await runtime.queue.boss.work<ImportJobData>(
+      queueNames.importOriginal,
+      { includeMetadata: true, pollingIntervalSeconds: 0.5, batchSize: 1 },
+      async (jobs: PgBoss.JobWithMetadata<ImportJobData>[]) => {
+        for (const job of jobs) {
+          try {
+            await importOriginal(job.data.originalId);
+          } catch (err) {
+            if (job.retryCount >= job.retryLimit) {
+              await repo.setStatus(job.data.originalId, 'failed', {
+                phase: 'done',
+                error: { code: 'import.failed', message: `The import could not be completed (${(err as Error).message}). The file is kept: retry it later, or delete it.` },
+              });
+            }
+            throw err;
+          }
+        }
+      },
+    );
+    ids.push(id);
+  }
+  return async () => {
+    for (const id of ids) await runtime.queue.boss.offWork({ id } as PgBoss.OffWorkOptions).catch(() => {});
+  };
+}

@@ -1,0 +1,90 @@
+import { createHash } from 'node:crypto';
+import { join } from 'node:path';
+import sharp from 'sharp';
+import { dominantColours } from '../../../shared/colour/palette';
+import { differenceHash } from '../../../shared/imaging/dhash';
+import type { PixelBox, RgbaImage } from './rgba-image';
+
+export const THUMB_LONGEST_SIDE = 320;
+
+export type MotifFingerprint = {
+  contentHash: string;
+  dhash: string;
+  colours: { hex: string; share: number; oklab: { l: number; a: number; b: number } }[];
+};
+
+export type EncodedMotif = MotifFingerprint & { pngFile: string; thumbFile: string };
+
+export type EncodeMotifOptions = {
+  outDir: string;
+  baseName: string;
+  pngCompressionLevel: number;
+  ppi?: number;
+};
+
+// Writes the lossless PNG master and the WebP thumbnail of the `crop` box of `image`, and
+// computes the motif's hashes and colours. The PNG master is started first: it is the slow part.
+export async function encodeMotif(image: RgbaImage, crop: PixelBox, options: EncodeMotifOptions): Promise<EncodedMotif> {
+  const width = crop.right - crop.left;
+  const height = crop.bottom - crop.top;
+  const pngFile = `${options.baseName}.png`;
+  const thumbFile = `${options.baseName}.thumb.webp`;
+  const region = { left: crop.left, top: crop.top, width, height };
+  const raw = { raw: { width: image.width, height: image.height, channels: 4 as const } };
+  const full = width === image.width && height === image.height;
+
+  let master = sharp(image.data, raw);
+  if (!full) master = master.extract(region);
+  if (options.ppi) master = master.withDensity(options.ppi);
+  const pngWritten = master.png({ compressionLevel: options.pngCompressionLevel, adaptiveFiltering: false })
+    .toFile(join(options.outDir, pngFile));
+
+  let small = sharp(image.data, raw);
+  if (!full) small = small.extract(region);
+  const thumb = await small
+    .resize(THUMB_LONGEST_SIDE, THUMB_LONGEST_SIDE, { fit: 'inside', withoutEnlargement: true })
+    .ensureAlpha()
+    .raw()
+    .toBuffer({ resolveWithObject: true });
+  const thumbRaw = { raw: { width: thumb.info.width, height: thumb.info.height, channels: 4 as const } };
+  const [, gray] = await Promise.all([
+    sharp(thumb.data, thumbRaw).webp({ quality: 82, alphaQuality: 90 }).toFile(join(options.outDir, thumbFile)),
+    grayForDifferenceHash(thumb.data, thumb.info.width, thumb.info.height),
+  ]);
+  const contentHash = hashPixels(image, crop);
+  const colours = dominantColours(new Uint8Array(thumb.data.buffer, thumb.data.byteOffset, thumb.data.length), thumb.info.width, thumb.info.height);
+  await pngWritten;
+  return { pngFile, thumbFile, contentHash, dhash: differenceHash(gray, 9, 8), colours };
+}
+
+// sha256 of uint32 BE width, uint32 BE height and the RGBA bytes of the box, row by row.
+export function hashPixels(image: RgbaImage, crop: PixelBox): string {
+  const width = crop.right - crop.left;
+  const height = crop.bottom - crop.top;
+  const hash = createHash('sha256');
+  const size = Buffer.alloc(8);
+  size.writeUInt32BE(width, 0);
+  size.writeUInt32BE(height, 4);
+  hash.update(size);
+  const rowBytes = image.width * 4;
+  if (width === image.width) {
+    hash.update(image.data.subarray(crop.top * rowBytes, crop.bottom * rowBytes));
+  } else {
+    for (let y = crop.top; y < crop.bottom; y++) {
+      const start = y * rowBytes + crop.left * 4;
+      hash.update(image.data.subarray(start, start + width * 4));
+    }
+  }
+  return hash.digest('hex');
+}
+
+// 9 x 8 grayscale of the motif composited on white, the input of the difference hash.
+export async function grayForDifferenceHash(rgba: Uint8Array, width: number, height: number): Promise<Uint8Array> {
+  const gray = await sharp(rgba, { raw: { width, height, channels: 4 } })
+    .flatten({ background: '#ffffff' })
+    .resize(9, 8, { fit: 'fill' })
+    .greyscale()
+    .raw()
+    .toBuffer();
+  return new Uint8Array(gray.buffer, gray.byteOffset, gray.length);
+}

@@ -1,0 +1,2 @@
+export * from './dhash';
+export * from './gray-thumbnail';

@@ -1,0 +1,3 @@
+export function classNames(...parts: Array<string | false | null | undefined>): string {
+  return parts.filter(Boolean).join(' ');
+}

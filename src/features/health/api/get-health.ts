@@ -1,0 +1,21 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { healthResponseSchema } from '@shared/contracts/studio';
+import { apiRequest } from '../../../lib/api-client';
+import { healthKeys } from './health-keys';
+
+export function getHealth({ signal }: { signal?: AbortSignal } = {}) {
+  return apiRequest('/health', { schema: healthResponseSchema, signal });
+}
+
+export const healthQueryOptions = () =>
+  queryOptions({
+    queryKey: healthKeys.all,
+    queryFn: ({ signal }) => getHealth({ signal }),
+    staleTime: 60_000,
+    refetchInterval: 120_000,
+    retry: false,
+  });
+
+export function useHealth() {
+  return useQuery(healthQueryOptions());
+}

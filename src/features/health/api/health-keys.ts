@@ -1,0 +1,1 @@
+export const healthKeys = { all: ['health'] as const };

@@ -1,0 +1,93 @@
+import type { Express } from 'express';
+import request from 'supertest';
+import { createApp } from '../../../server/app';
+import { parseConfig, type AppConfig } from '../../../server/config';
+import { featureRouters } from '../../../server/features/feature-routers';
+import { openRuntime, type Runtime } from '../../../server/runtime';
+
+export type TestApp = { app: Express; runtime: Runtime; config: AppConfig; close(): Promise<void> };
+
+// The real app on the run's real Postgres, fake S3 and fake SMTP (started by the api setup).
+export async function createTestApp(overrides: Record<string, string> = {}, options: { workers?: boolean } = {}): Promise<TestApp> {
+  const config = parseConfig({
+    ...process.env,
+    NODE_ENV: 'test',
+    RATE_LIMIT_SIGN_IN: '1000',
+    RATE_LIMIT_SIGN_UP: '1000',
+    RATE_LIMIT_RESET: '1000',
+    APP_URL: 'http://motifold.test',
+    ...overrides,
+  });
+  const runtime = await openRuntime(config);
+  const app = createApp({ ...runtime, extraRouters: (shared) => featureRouters(runtime, shared) });
+  // Loaded only when asked for, so tests without imports do not start the unpacker.
+  const stopWorkers = options.workers
+    ? await (await import('../../../server/jobs/workers')).startImportWorkers(runtime)
+    : async () => {};
+  return {
+    app,
+    runtime,
+    config,
+    async close() {
+      await stopWorkers();
+      await runtime.close();
+    },
+  };
+}
+
+let counter = 0;
+export const uniqueEmail = (label = 'user') => `${label}-${process.pid}-${Date.now().toString(36)}-${counter++}@saltmarsh.test`;
+
+// A browser-like client: keeps its cookie, fetches and repeats the CSRF token.
+export class ApiClient {
+  readonly agent: ReturnType<typeof request.agent>;
+  private token: string | null = null;
+
+  constructor(app: Express) {
+    this.agent = request.agent(app);
+  }
+
+  async csrf(): Promise<string> {
+    const res = await this.agent.get('/api/auth/csrf').expect(200);
+    this.token = res.body.csrfToken as string;
+    return this.token;
+  }
+
+  get(path: string) {
+    return this.agent.get(path);
+  }
+
+  async send(method: 'post' | 'patch' | 'put' | 'delete', path: string, body?: object) {
+    const token = this.token ?? (await this.csrf());
+    const req = this.agent[method](path).set('x-csrf-token', token);
+    const res = await (body === undefined ? req : req.send(body));
+    if (path.startsWith('/api/auth/sign-') || path.includes('/accept') || path.startsWith('/api/auth/password-reset/confirm')) this.token = null;
+    return res;
+  }
+
+  post(path: string, body?: object) {
+    return this.send('post', path, body);
+  }
+  patch(path: string, body?: object) {
+    return this.send('patch', path, body);
+  }
+  delete(path: string) {
+    return this.send('delete', path);
+  }
+
+  async upload(path: string, file: Buffer, fileName: string, fields: Record<string, string> = {}) {
+    const token = this.token ?? (await this.csrf());
+    let req = this.agent.post(path).set('x-csrf-token', token);
+    for (const [k, v] of Object.entries(fields)) req = req.field(k, v);
+    return req.attach('file', file, fileName);
+  }
+}
+
+export async function signUpOwner(app: Express, studioName = 'Saltmarsh Studio') {
+  const client = new ApiClient(app);
+  const email = uniqueEmail('owner');
+  const password = 'puffins-in-jumpers';
+  const res = await client.post('/api/auth/sign-up', { name: 'Ines Okafor', email, password, studioName });
+  if (res.status !== 201) throw new Error(`sign-up failed: ${res.status} ${JSON.stringify(res.body)}`);
+  return { client, email, password, me: res.body as { user: { id: string }; studio: { id: string } } };
+}
