@@ -32,7 +32,7 @@ export async function ensurePostgres(options: PostgresOptions): Promise<RunningP
 
   await mkdir(path.dirname(logFile), { recursive: true });
   await prepareClusterFolder(clusterDir, dataDir);
-  if (!existsSync(path.join(dataDir, 'PG_VERSION'))) await initCluster(bin, dataDir);
+  if (!existsSync(path.join(dataDir, 'PG_VERSION'))) await initCluster(bin, dataDir, options.throwaway ?? false);
 
   const runningPort = (await isClusterRunning(bin, dataDir)) ? await readClusterPort(dataDir) : null;
   const port = runningPort ?? options.port;
@@ -61,10 +61,11 @@ export async function ensurePostgres(options: PostgresOptions): Promise<RunningP
   };
 }
 
-async function initCluster(bin: string, dataDir: string): Promise<void> {
+async function initCluster(bin: string, dataDir: string, throwaway: boolean): Promise<void> {
   // A half-made cluster (initdb interrupted) would make initdb refuse; it holds nothing worth keeping.
   for (const entry of await readdir(dataDir)) await rm(path.join(dataDir, entry), { recursive: true, force: true });
-  await runPgTool(bin, 'initdb', ['-D', dataDir, '-U', 'postgres', '--auth=trust', '-E', 'UTF8', '--locale=C.UTF-8']);
+  const args = ['-D', dataDir, '-U', 'postgres', '--auth=trust', '-E', 'UTF8', '--locale=C.UTF-8'];
+  await runPgTool(bin, 'initdb', throwaway ? [...args, '--no-sync'] : args);
 }
 
 async function isClusterRunning(bin: string, dataDir: string): Promise<boolean> {

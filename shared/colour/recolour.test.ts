@@ -24,10 +24,8 @@ describe('solid fill', () => {
     const out = solidFill(input, hexToRgb('#2a9d8f'));
     expect(out).not.toBe(input);
     expect(input).toEqual(before);
-    for (let i = 0; i < out.length; i += 4) {
-      expect([out[i], out[i + 1], out[i + 2]]).toEqual([0x2a, 0x9d, 0x8f]);
-      expect(out[i + 3]).toBe(input[i + 3]);
-    }
+    const expected = input.map((v, i) => [0x2a, 0x9d, 0x8f, v][i % 4]);
+    expect(out).toEqual(expected);
   });
 });
 

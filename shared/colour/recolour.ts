@@ -35,8 +35,15 @@ export function hueShift(rgba: PixelBuffer, degrees: number): Uint8ClampedArray 
 
 /** Every pixel becomes `colour`; alpha keeps the motif's shape. */
 export function solidFill(rgba: PixelBuffer, colour: Rgb): Uint8ClampedArray {
-  const packed = (clampByte(colour.r) << 16) | (clampByte(colour.g) << 8) | clampByte(colour.b);
-  return mapPixelColours(rgba, () => packed);
+  const [r, g, b] = [clampByte(colour.r), clampByte(colour.g), clampByte(colour.b)];
+  const out = new Uint8ClampedArray(rgba);
+  const whole = out.length - (out.length % 4);
+  for (let i = 0; i < whole; i += 4) {
+    out[i] = r;
+    out[i + 1] = g;
+    out[i + 2] = b;
+  }
+  return out;
 }
 
 /** How much of the swap a pixel at OKLab distance `d` from the source colour receives (1 inside, 0 outside). */

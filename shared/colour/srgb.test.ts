@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { convertRgbToLrgb } from 'culori';
-import { hexToRgb, linearToSrgb, parseHexColour, rgbToHex, srgbToLinear } from './srgb';
+import { clampByte, hexToRgb, linearToByte, linearToSrgb, parseHexColour, rgbToHex, srgbToLinear } from './srgb';
 import { readReferenceCsv } from './test-support/reference-csv';
 
 // IEC 61966-2-1 constants as listed in srgb-lab-reference.csv (constant rows).
@@ -61,5 +61,14 @@ describe('sRGB transfer function (IEC 61966-2-1)', () => {
   it('mirrors negative values instead of returning NaN', () => {
     expect(srgbToLinear(-0.5)).toBeCloseTo(-srgbToLinear(0.5), 12);
     expect(linearToSrgb(-0.2)).toBeCloseTo(-linearToSrgb(0.2), 12);
+  });
+
+  it('encodes linear light straight to the nearest byte, as rounding the curve would', () => {
+    for (let i = 0; i <= 200_000; i++) {
+      const v = i / 200_000;
+      const expected = clampByte(linearToSrgb(v) * 255);
+      if (linearToByte(v) !== expected) throw new Error(`linear ${v}: ${linearToByte(v)} instead of ${expected}`);
+    }
+    expect([linearToByte(-0.1), linearToByte(1.5), linearToByte(Number.NaN), linearToByte(srgbToLinear(0.5))]).toEqual([0, 255, 0, 128]);
   });
 });

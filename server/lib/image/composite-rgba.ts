@@ -1,4 +1,4 @@
-import { nonSeparableBlends, separableBlends, type Rgb } from './blend-modes';
+import { nonSeparableBlends, separableBlends, type NonSeparableBlend, type Rgb, type SeparableBlend } from './blend-modes';
 import type { GrayImage, RgbaImage } from './rgba-image';
 
 export type MaskImage = GrayImage & { defaultColor: number };
@@ -23,8 +23,8 @@ export function compositeOnto(canvas: RgbaImage, source: RgbaImage, options: Com
   const y1 = Math.min(canvas.top + canvas.height, source.top + source.height);
   if (x1 <= x0 || y1 <= y0 || options.opacity <= 0) return;
 
-  const separable = separableBlends[options.blendMode] ?? (nonSeparableBlends[options.blendMode] ? null : separableBlends.normal);
-  const nonSeparable = separable ? null : nonSeparableBlends[options.blendMode];
+  const nonSeparable = nonSeparableBlends[options.blendMode] as NonSeparableBlend | undefined;
+  const separable = nonSeparable ? null : (separableBlends[options.blendMode] as SeparableBlend | undefined) ?? separableBlends.normal;
   const isNormal = separable === separableBlends.normal;
   const clip = options.clipToBackdrop === true;
   const { mask } = options;

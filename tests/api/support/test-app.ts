@@ -91,3 +91,18 @@ export async function signUpOwner(app: Express, studioName = 'Saltmarsh Studio')
   if (res.status !== 201) throw new Error(`sign-up failed: ${res.status} ${JSON.stringify(res.body)}`);
   return { client, email, password, me: res.body as { user: { id: string }; studio: { id: string } } };
 }
+
+// Invites someone through the API, follows the mailed link and accepts it as a new account.
+export async function addMember(app: Express, owner: ApiClient, role: 'editor' | 'reviewer', name = role === 'editor' ? 'Teodor Vance' : 'June Abara') {
+  const email = uniqueEmail(role);
+  const invite = await owner.post('/api/studio/invitations', { email, role });
+  if (invite.status !== 201) throw new Error(`invite failed: ${invite.status} ${JSON.stringify(invite.body)}`);
+  const { mailsTo, linkIn } = await import('./inbox');
+  const [mail] = await mailsTo(email);
+  const token = linkIn(mail, /\/invitations\/[A-Za-z0-9_-]+/).split('/').pop()!;
+  const client = new ApiClient(app);
+  const password = 'salt-and-spray-42';
+  const accepted = await client.post(`/api/invitations/${token}/accept`, { name, password });
+  if (accepted.status !== 200) throw new Error(`accept failed: ${accepted.status} ${JSON.stringify(accepted.body)}`);
+  return { client, email, password, userId: accepted.body.user.id as string };
+}

@@ -1,0 +1,104 @@
+import { fork, type ChildProcess } from 'node:child_process';
+import { readFileSync } from 'node:fs';
+import { createRequire } from 'node:module';
+import { fileURLToPath, pathToFileURL } from 'node:url';
+import { UnpackError, isUnpackErrorCode } from './unpack-error';
+import { resolveUnpackLimits } from './unpack-limits';
+import { childMessageSchema, type UnpackRequest } from './unpack-messages';
+import type { UnpackInput } from './unpack-original';
+import type { UnpackProgress, UnpackResult } from './unpack-result';
+
+export type { UnpackInput } from './unpack-original';
+
+const ENTRY = fileURLToPath(new URL('./unpack-child-entry.ts', import.meta.url));
+const TSX_LOADER = pathToFileURL(createRequire(import.meta.url).resolve('tsx')).href;
+const MEMORY_POLL_MS = 50;
+const STDERR_KEEP = 8192;
+// the child handles hostile input: it gets no database, storage or session secrets
+const CHILD_ENV_KEYS = ['PATH', 'NODE_ENV', 'TMPDIR', 'LANG', 'TZ', 'UV_THREADPOOL_SIZE', 'VIPS_CONCURRENCY'];
+
+// Unpacks an uploaded original in a child process (tsx loader, capped V8 heap, resident
+// memory watched, wall-clock limit), so a hostile file can never take the calling process down.
+// Rejects with an UnpackError naming the problem.
+export function runUnpack(input: UnpackInput, onProgress?: (progress: UnpackProgress) => void): Promise<UnpackResult> {
+  const limits = resolveUnpackLimits(input.limits);
+  const started = performance.now();
+  const child = fork(ENTRY, [], {
+    execArgv: ['--import', TSX_LOADER, `--max-old-space-size=${Math.round(limits.maxHeapMb)}`],
+    stdio: ['ignore', 'ignore', 'pipe', 'ipc'],
+    env: childEnv(),
+    serialization: 'json',
+  });
+  return new Promise<UnpackResult>((resolve, reject) => {
+    let settled = false;
+    let stderr = '';
+    let peakRss = 0;
+    const finish = (error: UnpackError | null, result?: UnpackResult) => {
+      if (settled) return;
+      settled = true;
+      clearTimeout(timer);
+      clearInterval(watch);
+      if (child.exitCode === null && child.signalCode === null) child.kill('SIGKILL');
+      if (error) reject(error);
+      else resolve(result!);
+    };
+    const timer = setTimeout(() => finish(new UnpackError('psd.timeout',
+      `Unpacking took longer than ${Math.round(limits.timeoutMs / 1000)} s and was stopped; the file may be damaged or too complex`)), limits.timeoutMs);
+    const watch = setInterval(() => {
+      const rss = residentBytes(child);
+      peakRss = Math.max(peakRss, rss);
+      if (rss > limits.maxMemoryBytes) {
+        finish(new UnpackError('psd.out_of_memory',
+          `Unpacking needed more than ${Math.round(limits.maxMemoryBytes / 1048576)} MB of memory and was stopped; try a smaller or flatter file`));
+      }
+    }, MEMORY_POLL_MS);
+
+    child.stderr?.on('data', (chunk: Buffer) => {
+      stderr = (stderr + chunk.toString('utf8')).slice(-STDERR_KEEP);
+    });
+    child.on('message', (raw: unknown) => {
+      const parsed = childMessageSchema.safeParse(raw);
+      if (!parsed.success) return finish(new UnpackError('unpack.crashed', 'The unpack worker sent a malformed answer'));
+      const message = parsed.data;
+      if (message.type === 'progress') {
+        onProgress?.({ phase: message.phase, percent: message.percent });
+      } else if (message.type === 'result') {
+        const peakRssBytes = Math.max(peakRss, message.result.resources?.peakRssBytes ?? 0);
+        finish(null, { ...message.result, resources: { peakRssBytes, wallMs: Math.round(performance.now() - started) } });
+      } else {
+        finish(new UnpackError(isUnpackErrorCode(message.code) ? message.code : 'unpack.crashed', message.message));
+      }
+    });
+    child.on('error', (error) => finish(new UnpackError('unpack.crashed', `The unpack worker could not start (${error.message})`)));
+    child.on('exit', (code, signal) => {
+      if (settled) return;
+      const outOfMemory = /heap out of memory|Allocation failed|Cannot allocate memory|Array buffer allocation failed/i.test(stderr);
+      finish(outOfMemory
+        ? new UnpackError('psd.out_of_memory', 'The file needs more memory to unpack than this server allows')
+        : new UnpackError('unpack.crashed', `The unpack worker stopped unexpectedly (${signal ?? `exit code ${code}`})`));
+    });
+    const request: UnpackRequest = {
+      type: 'unpack',
+      input: { filePath: input.filePath, outDir: input.outDir, cut: input.cut, originalName: input.originalName, limits },
+    };
+    child.send(request);
+  });
+}
+
+function residentBytes(child: ChildProcess): number {
+  if (!child.pid) return 0;
+  try {
+    const status = readFileSync(`/proc/${child.pid}/status`, 'utf8');
+    const kb = /VmRSS:\s+(\d+)\s+kB/.exec(status);
+    return kb ? Number(kb[1]) * 1024 : 0;
+  } catch {
+    // no /proc (not Linux) or the child has exited
+    return 0;
+  }
+}
+
+function childEnv(): NodeJS.ProcessEnv {
+  const env: NodeJS.ProcessEnv = {};
+  for (const key of CHILD_ENV_KEYS) if (process.env[key] !== undefined) env[key] = process.env[key];
+  return env;
+}

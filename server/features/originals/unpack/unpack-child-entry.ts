@@ -1,0 +1,49 @@
+import { isUnpackError } from './unpack-error';
+import { unpackRequestSchema, type ChildMessage } from './unpack-messages';
+import { unpackOriginal } from './unpack-original';
+import type { UnpackProgress } from './unpack-result';
+
+// Entry of the unpack child process (forked by runUnpack): one request, one answer, exit.
+const PROGRESS_INTERVAL_MS = 200;
+
+function send(message: ChildMessage): Promise<void> {
+  return new Promise((resolve) => {
+    if (!process.send) return resolve();
+    process.send(message, undefined, {}, () => resolve());
+  });
+}
+
+async function handle(raw: unknown): Promise<void> {
+  const started = performance.now();
+  const request = unpackRequestSchema.safeParse(raw);
+  if (!request.success) {
+    await send({ type: 'error', code: 'unpack.crashed', message: 'The unpack worker received a malformed request' });
+    return;
+  }
+  let lastSent = 0;
+  const onProgress = (progress: UnpackProgress) => {
+    const now = performance.now();
+    if (now - lastSent < PROGRESS_INTERVAL_MS && progress.percent < 99) return;
+    lastSent = now;
+    void send({ type: 'progress', ...progress });
+  };
+  try {
+    const result = await unpackOriginal(request.data.input, onProgress);
+    result.resources = { peakRssBytes: process.resourceUsage().maxRSS * 1024, wallMs: Math.round(performance.now() - started) };
+    await send({ type: 'result', result });
+  } catch (error) {
+    if (isUnpackError(error)) {
+      await send({ type: 'error', code: error.code, message: error.message });
+    } else {
+      const detail = error instanceof Error ? error.message.replace(/[^\x20-\x7e]/g, '?').slice(0, 160) : 'unknown error';
+      const outOfMemory = error instanceof RangeError && /allocation|array buffer|memory/i.test(detail);
+      await send(outOfMemory
+        ? { type: 'error', code: 'psd.out_of_memory', message: 'The file needs more memory to unpack than this server allows' }
+        : { type: 'error', code: 'unpack.crashed', message: `The file could not be unpacked (${detail})` });
+    }
+  }
+}
+
+process.once('message', (raw: unknown) => {
+  handle(raw).finally(() => process.exit(0));
+});

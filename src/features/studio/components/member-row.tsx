@@ -1,0 +1,106 @@
+import { useState } from 'react';
+import { studioRoles, type StudioRole } from '@shared/auth/permissions';
+import type { Member } from '@shared/contracts/studio';
+import { Button } from '../../../components/ui/button';
+import { Dialog } from '../../../components/ui/dialog';
+import { Select } from '../../../components/ui/select-field';
+import { VisuallyHidden } from '../../../components/ui/visually-hidden';
+import { formatDay } from '../../../lib/format';
+import { errorMessageOf } from '../../../lib/use-form-errors';
+import { roleNames, roleOptions } from '../../auth/components/role-words';
+import { useUpdateMember } from '../api/update-member';
+import type { Notice } from './notice';
+
+type MemberRowProps = {
+  member: Member;
+  isYou: boolean;
+  canManage: boolean;
+  onNotice: (notice: Notice) => void;
+  onRemove: (member: Member) => void;
+};
+
+// A role change is chosen, then saved: arrowing through a select must not change anyone's role.
+export function MemberRow({ member, isYou, canManage, onNotice, onRemove }: MemberRowProps) {
+  const [draft, setDraft] = useState<StudioRole>(member.role);
+  const [confirmingSelfDemotion, setConfirmingSelfDemotion] = useState(false);
+  const updateMember = useUpdateMember({
+    mutationConfig: {
+      onSuccess: (_, { role }) =>
+        onNotice({ tone: 'ok', text: `${isYou ? 'You are' : `${member.name} is`} now ${roleNames[role].toLowerCase()}.` }),
+      onError: (error) => {
+        setDraft(member.role);
+        onNotice({ tone: 'problem', text: errorMessageOf(error) });
+      },
+    },
+  });
+  const changed = draft !== member.role;
+  const save = () => {
+    setConfirmingSelfDemotion(false);
+    updateMember.mutate({ userId: member.userId, role: draft });
+  };
+
+  return (
+    <tr className="border-t border-sand align-middle">
+      <th scope="row" className="py-3 pr-4 text-left font-normal">
+        <span className="block font-semibold text-ink">
+          {member.name}
+          {isYou && <span className="ml-1.5 font-normal text-ink-soft">(you)</span>}
+        </span>
+        <span className="block text-sm break-all text-ink-soft">{member.email}</span>
+      </th>
+      <td className="py-3 pr-4">
+        {canManage ? (
+          <div className="flex items-center gap-2">
+            <Select
+              aria-label={`Role of ${member.name}`}
+              name={`role-${member.userId}`}
+              value={draft}
+              options={roleOptions(studioRoles)}
+              onChange={(event) => setDraft(event.target.value as StudioRole)}
+              className="w-36 border-sand py-1.5"
+            />
+            {changed && (
+              <Button
+                size="sm"
+                busy={updateMember.isPending}
+                busyLabel="Saving…"
+                onClick={() => (isYou && draft !== 'owner' ? setConfirmingSelfDemotion(true) : save())}
+              >
+                Save<VisuallyHidden> role of {member.name}</VisuallyHidden>
+              </Button>
+            )}
+          </div>
+        ) : (
+          <span className="inline-flex rounded-full border border-sand bg-shell px-2.5 py-0.5 text-sm font-semibold">
+            {roleNames[member.role]}
+          </span>
+        )}
+      </td>
+      <td className="py-3 pr-4 whitespace-nowrap text-ink-soft">{formatDay(member.joinedAt)}</td>
+      {canManage && (
+        <td className="py-3 text-right">
+          <Button variant="quiet" size="sm" onClick={() => onRemove(member)}>
+            {isYou ? 'Leave' : 'Remove'}
+            <VisuallyHidden> {member.name}</VisuallyHidden>
+          </Button>
+          <Dialog
+            open={confirmingSelfDemotion}
+            onClose={() => setConfirmingSelfDemotion(false)}
+            title={`Make yourself ${roleNames[draft].toLowerCase()}?`}
+            description="You will no longer be able to invite people, change roles or change studio settings. Another owner can make you an owner again."
+            actions={
+              <>
+                <Button variant="secondary" data-autofocus onClick={() => setConfirmingSelfDemotion(false)}>
+                  Stay owner
+                </Button>
+                <Button variant="danger" onClick={save}>
+                  Change my role
+                </Button>
+              </>
+            }
+          />
+        </td>
+      )}
+    </tr>
+  );
+}

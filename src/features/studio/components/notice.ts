@@ -1,0 +1,3 @@
+import type { StatusTone } from '../../../components/ui/status-message';
+
+export type Notice = { tone: StatusTone; text: string };
