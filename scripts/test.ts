@@ -12,8 +12,10 @@ const resultsSchema = z.object({
   numFailedTests: z.number(),
   numPendingTests: z.number().default(0),
   numTodoTests: z.number().default(0),
-  numFailedTestSuites: z.number().default(0),
   success: z.boolean(),
+  testResults: z
+    .array(z.object({ name: z.string(), status: z.string(), assertionResults: z.array(z.unknown()).default([]) }))
+    .default([]),
 });
 
 function ensureSystemPackages(): boolean {
@@ -37,9 +39,11 @@ function runVitest(extraArgs: string[]): number {
   return run.status ?? 1;
 }
 
-function closingLine(results: z.infer<typeof resultsSchema>): string {
+// A test file that fails to load has no tests, so vitest counts it nowhere; it counts here as one failure.
+function closingLine(results: z.infer<typeof resultsSchema>, filesNotRun: number): string {
   const skipped = results.numPendingTests + results.numTodoTests;
-  return `${results.numPassedTests} passed, ${results.numFailedTests} failed${skipped ? `, ${skipped} skipped` : ''}`;
+  const failed = results.numFailedTests + filesNotRun;
+  return `${results.numPassedTests} passed, ${failed} failed${skipped ? `, ${skipped} skipped` : ''}`;
 }
 
 if (!ensureSystemPackages()) {
@@ -54,6 +58,8 @@ if (!parsed?.success) {
   process.exit(exitCode || 1);
 }
 const results = parsed.data;
-if (results.numFailedTestSuites > 0) console.log(`\n${results.numFailedTestSuites} test file(s) could not run`);
-console.log(`\n${closingLine(results)}`);
-process.exit(exitCode !== 0 || results.numFailedTests > 0 || !results.success ? exitCode || 1 : 0);
+const filesNotRun = results.testResults.filter((file) => file.status === 'failed' && file.assertionResults.length === 0);
+for (const file of filesNotRun) console.log(`could not run ${path.relative(repoRoot, file.name)}`);
+console.log(`\n${closingLine(results, filesNotRun.length)}`);
+const failed = exitCode !== 0 || results.numFailedTests > 0 || filesNotRun.length > 0 || !results.success;
+process.exit(failed ? exitCode || 1 : 0);

@@ -9,6 +9,7 @@ const boolean = z
 const configSchema = z.object({
   NODE_ENV: z.enum(['development', 'test', 'production']).default('development'),
   PORT: z.coerce.number().int().min(0).max(65535).default(3000),
+  HOST: z.string().default('127.0.0.1'),
   APP_URL: z.string().url().optional(),
   DATABASE_URL: z.string().url().default('postgres://postgres@127.0.0.1:54329/motifold'),
   SESSION_SECRET: z.string().min(16, 'SESSION_SECRET must be at least 16 characters').optional(),

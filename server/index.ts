@@ -10,7 +10,7 @@ const runtime = await openRuntime(config);
 const app = createApp({ ...runtime, extraRouters: (shared) => featureRouters(runtime, shared) });
 const stopWorkers = config.RUN_WORKER_IN_PROCESS ? await startImportWorkers(runtime) : async () => {};
 
-const server: Server = app.listen(config.PORT, '127.0.0.1', () => {
+const server: Server = app.listen(config.PORT, config.HOST, () => {
   console.log(`Motifold is listening on ${config.appUrl}`);
 });
 

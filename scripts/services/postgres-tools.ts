@@ -26,25 +26,16 @@ export function findPostgresBin(): string {
   return path.join(root, versions[0], 'bin');
 }
 
-export async function runPgTool(
-  bin: string,
-  tool: string,
-  args: string[],
-  { detached = false }: { detached?: boolean } = {},
-): Promise<string> {
+// pg_ctl start puts the server in a session of its own (setsid), so a terminal Ctrl-C reaches
+// our shutdown code and not the database, which we then stop last.
+export async function runPgTool(bin: string, tool: string, args: string[]): Promise<string> {
   const executable = path.join(bin, tool);
   const [command, commandArgs] = runningAsRoot
     ? ['runuser', ['-u', 'postgres', '--', executable, ...args]]
     : [executable, args];
   try {
     // cwd '/': the postgres user may not be allowed to enter our working directory
-    const { stdout } = await execFileAsync(command, commandArgs, {
-      cwd: '/',
-      timeout: 60_000,
-      // detached: the server gets its own process group, so a terminal Ctrl-C reaches our
-      // shutdown code instead of the database, which we then stop in order
-      detached,
-    });
+    const { stdout } = await execFileAsync(command, commandArgs, { cwd: '/', timeout: 60_000 });
     return stdout;
   } catch (error) {
     const failure = error as { stderr?: string; stdout?: string; message: string };

@@ -81,9 +81,7 @@ async function startCluster(bin: string, dataDir: string, logFile: string, port:
   // TCP on loopback only; `-k ''` turns off the unix socket (no socket path length or permission traps).
   const serverOptions = [`-p ${port}`, "-k ''", '-c listen_addresses=127.0.0.1', ...(throwaway ? throwawaySettings : [])];
   try {
-    await runPgTool(bin, 'pg_ctl', ['-D', dataDir, '-l', logFile, '-w', '-t', '30', '-o', serverOptions.join(' '), 'start'], {
-      detached: true,
-    });
+    await runPgTool(bin, 'pg_ctl', ['-D', dataDir, '-l', logFile, '-w', '-t', '30', '-o', serverOptions.join(' '), 'start']);
   } catch (error) {
     const message = error instanceof Error ? error.message : String(error);
     throw new ServiceError('postgres.start_failed', `${message}\n(see ${logFile})`);

@@ -30,6 +30,8 @@ export type RequestOptions = {
   method?: Method;
   body?: unknown;
   signal?: AbortSignal;
+  /** Error statuses whose body is still an answer in `schema` (the health check's 503). */
+  answerStatuses?: readonly number[];
 };
 
 const apiBase = '/api';
@@ -104,8 +106,12 @@ async function readError(response: Response): Promise<ApiRequestError> {
   });
 }
 
-async function readBody<S extends z.ZodType>(response: Response, schema: S): Promise<z.output<S>> {
-  if (!response.ok) throw await readError(response);
+async function readBody<S extends z.ZodType>(
+  response: Response,
+  schema: S,
+  answerStatuses: readonly number[] = [],
+): Promise<z.output<S>> {
+  if (!response.ok && !answerStatuses.includes(response.status)) throw await readError(response);
   const json: unknown = await response.json().catch(() => undefined);
   const parsed = schema.safeParse(json);
   if (!parsed.success) {
@@ -140,7 +146,7 @@ export async function apiRequest(
   options: RequestOptions & { schema?: z.ZodType } = {},
 ): Promise<unknown> {
   const response = await sendWithCsrf(path, options);
-  if (options.schema) return readBody(response, options.schema);
+  if (options.schema) return readBody(response, options.schema, options.answerStatuses);
   if (!response.ok) throw await readError(response);
   return undefined;
 }

@@ -1,4 +1,4 @@
-import { and, eq, inArray, ne, sql } from 'drizzle-orm';
+import { and, eq, inArray, ne, or } from 'drizzle-orm';
 import type { Database } from '../../db/client';
 import { motifs, motifVersions, originalMotifs, originals } from '../../db/schema/index';
 import type { ObjectStorage } from '../../lib/storage';
@@ -12,7 +12,7 @@ export function createOriginalsCleanup(db: Database, storage: ObjectStorage) {
     const versionRows = await db
       .select({ png: motifVersions.pngKey, thumb: motifVersions.thumbKey })
       .from(motifVersions)
-      .where(sql`${motifVersions.pngKey} = any(${candidates}) or ${motifVersions.thumbKey} = any(${candidates})`);
+      .where(or(inArray(motifVersions.pngKey, candidates), inArray(motifVersions.thumbKey, candidates)));
     for (const r of versionRows) stillUsed.add(r.png).add(r.thumb);
     const originalRows = await db.select({ key: originals.storageKey }).from(originals).where(inArray(originals.storageKey, candidates));
     for (const r of originalRows) stillUsed.add(r.key);

@@ -23,12 +23,7 @@ const CHILD_ENV_KEYS = ['PATH', 'NODE_ENV', 'TMPDIR', 'LANG', 'TZ', 'UV_THREADPO
 export function runUnpack(input: UnpackInput, onProgress?: (progress: UnpackProgress) => void): Promise<UnpackResult> {
   const limits = resolveUnpackLimits(input.limits);
   const started = performance.now();
-  const child = fork(ENTRY, [], {
-    execArgv: ['--import', TSX_LOADER, `--max-old-space-size=${Math.round(limits.maxHeapMb)}`],
-    stdio: ['ignore', 'ignore', 'pipe', 'ipc'],
-    env: childEnv(),
-    serialization: 'json',
-  });
+  const child = takeChild(Math.round(limits.maxHeapMb));
   return new Promise<UnpackResult>((resolve, reject) => {
     let settled = false;
     let stderr = '';
@@ -81,8 +76,71 @@ export function runUnpack(input: UnpackInput, onProgress?: (progress: UnpackProg
       type: 'unpack',
       input: { filePath: input.filePath, outDir: input.outDir, cut: input.cut, originalName: input.originalName, limits },
     };
-    child.send(request);
+    try {
+      child.send(request);
+    } catch {
+      finish(new UnpackError('unpack.crashed', 'The unpack worker could not be reached'));
+    }
   });
+}
+
+// Starting a child (tsx, sharp, ag-psd) takes most of a second. A long-running worker can keep
+// one spare child loaded and idle; each child still unpacks exactly one file.
+let keepSpare = false;
+let spare: { child: ChildProcess; heapMb: number } | null = null;
+
+export function prewarmUnpackWorker(enabled = true): void {
+  keepSpare = enabled;
+  if (enabled) ensureSpare(resolveUnpackLimits().maxHeapMb);
+  else if (spare) {
+    spare.child.kill('SIGKILL');
+    spare = null;
+  }
+}
+
+function takeChild(heapMb: number): ChildProcess {
+  let child: ChildProcess;
+  if (spare && spare.heapMb === heapMb && spare.child.exitCode === null && spare.child.connected) {
+    child = spare.child;
+    child.ref();
+    refChannel(child, true);
+    spare = null;
+  } else {
+    child = spawnChild(heapMb);
+  }
+  if (keepSpare) ensureSpare(heapMb);
+  return child;
+}
+
+function ensureSpare(heapMb: number): void {
+  if (spare && spare.child.exitCode === null && spare.child.connected && spare.heapMb === heapMb) return;
+  spare?.child.kill('SIGKILL');
+  const child = spawnChild(heapMb);
+  // an idle spare must not keep the parent process alive
+  child.unref();
+  refChannel(child, false);
+  child.on('exit', () => {
+    if (spare?.child === child) spare = null;
+  });
+  spare = { child, heapMb };
+}
+
+function spawnChild(heapMb: number): ChildProcess {
+  return fork(ENTRY, [], {
+    execArgv: ['--import', TSX_LOADER, `--max-old-space-size=${heapMb}`],
+    stdio: ['ignore', 'ignore', 'pipe', 'ipc'],
+    env: childEnv(),
+    serialization: 'json',
+  });
+}
+
+function refChannel(child: ChildProcess, on: boolean): void {
+  const channel = (child as ChildProcess & { channel?: { ref(): void; unref(): void } }).channel;
+  if (on) channel?.ref();
+  else channel?.unref();
+  const stderr = child.stderr as (NodeJS.ReadableStream & { ref?: () => void; unref?: () => void }) | null;
+  if (on) stderr?.ref?.();
+  else stderr?.unref?.();
 }
 
 function residentBytes(child: ChildProcess): number {

@@ -1,5 +1,5 @@
 import { isUnpackError } from './unpack-error';
-import { unpackRequestSchema, type ChildMessage } from './unpack-messages';
+import type { ChildMessage, UnpackRequest } from './unpack-messages';
 import { unpackOriginal } from './unpack-original';
 import type { UnpackProgress } from './unpack-result';
 
@@ -15,8 +15,8 @@ function send(message: ChildMessage): Promise<void> {
 
 async function handle(raw: unknown): Promise<void> {
   const started = performance.now();
-  const request = unpackRequestSchema.safeParse(raw);
-  if (!request.success) {
+  const request = asRequest(raw);
+  if (!request) {
     await send({ type: 'error', code: 'unpack.crashed', message: 'The unpack worker received a malformed request' });
     return;
   }
@@ -28,7 +28,7 @@ async function handle(raw: unknown): Promise<void> {
     void send({ type: 'progress', ...progress });
   };
   try {
-    const result = await unpackOriginal(request.data.input, onProgress);
+    const result = await unpackOriginal(request.input, onProgress);
     result.resources = { peakRssBytes: process.resourceUsage().maxRSS * 1024, wallMs: Math.round(performance.now() - started) };
     await send({ type: 'result', result });
   } catch (error) {
@@ -43,6 +43,20 @@ async function handle(raw: unknown): Promise<void> {
     }
   }
 }
+
+// The request comes from our own parent; a structural check is enough (zod stays out of the
+// child to keep its start-up short).
+function asRequest(raw: unknown): UnpackRequest | null {
+  const request = raw as UnpackRequest | null;
+  const input = request?.input;
+  if (request?.type !== 'unpack' || typeof input !== 'object' || input === null) return null;
+  if (typeof input.filePath !== 'string' || typeof input.outDir !== 'string') return null;
+  if (input.cut !== 'groups' && input.cut !== 'layers') return null;
+  return request;
+}
+
+// a spare child whose parent went away has nothing left to do
+process.on('disconnect', () => process.exit(0));
 
 process.once('message', (raw: unknown) => {
   handle(raw).finally(() => process.exit(0));

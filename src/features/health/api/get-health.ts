@@ -4,7 +4,8 @@ import { apiRequest } from '../../../lib/api-client';
 import { healthKeys } from './health-keys';
 
 export function getHealth({ signal }: { signal?: AbortSignal } = {}) {
-  return apiRequest('/health', { schema: healthResponseSchema, signal });
+  // A degraded service answers 503 with the same body, which is exactly what the notice needs.
+  return apiRequest('/health', { schema: healthResponseSchema, signal, answerStatuses: [503] });
 }
 
 export const healthQueryOptions = () =>
