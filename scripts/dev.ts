@@ -3,9 +3,11 @@ import path from 'node:path';
 import { startChild, waitForHealthy } from './services/child-process';
 import { prepareLocalApp, printSignIns, timed, type PreparedApp } from './services/local-app';
 import { tsxCli, viteCli } from './services/repo-paths';
-import { describeError } from './services/service-error';
+import { isPortTaken } from './services/free-port';
+import { describeError, ServiceError } from './services/service-error';
 
-const vitePort = 5173; // vite.config.ts server.port
+// vite.config.ts listens on 5173; VITE_PORT moves it when a colleague's dev server holds that port
+const vitePort = Number(process.env.VITE_PORT ?? 5173);
 
 async function runApp(app: PreparedApp): Promise<void> {
   // tsx watch follows the server's own imports (server/, shared/), so client edits don't restart it
@@ -14,7 +16,10 @@ async function runApp(app: PreparedApp): Promise<void> {
     detached: true,
   });
   // vite.config.ts reads PORT to proxy /api to this server
-  const vite = startChild('vite', process.execPath, [viteCli, '--strictPort'], { env: app.env, detached: true });
+  const vite = startChild('vite', process.execPath, [viteCli, '--port', String(vitePort), '--strictPort'], {
+    env: app.env,
+    detached: true,
+  });
   app.children.push(vite, server);
   app.stopWhenChildEnds(vite);
   app.stopWhenChildEnds(server);
@@ -23,6 +28,9 @@ async function runApp(app: PreparedApp): Promise<void> {
 
 let app: PreparedApp | undefined;
 try {
+  if (await isPortTaken(vitePort)) {
+    throw new ServiceError('dev.port_taken', `port ${vitePort} for the vite dev server is already in use; stop that server or set VITE_PORT`);
+  }
   app = await prepareLocalApp({ nodeEnv: 'development', appUrl: () => `http://127.0.0.1:${vitePort}` });
   await runApp(app);
   printSignIns(app.env.APP_URL ?? '', app.env.MAIL_INBOX_URL);

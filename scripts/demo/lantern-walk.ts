@@ -63,7 +63,7 @@ export function lanternWalk(): DemoDocument {
     ['Oak leaf', 260, 820, 20, 1.6, '#d9822b', true], ['Birch leaf', 520, 1020, -35, 1.2, '#f2b134', false],
     ['Beech leaf', 900, 760, 60, 1.4, '#c4492c', false], ['Oak leaf small', 1240, 980, -15, 1.1, '#e0a030', true],
     ['Rowan leaf', 1100, 1260, 110, 1.3, '#b83a2a', false], ['Maple-ish leaf', 380, 1260, -70, 1.5, '#e5673a', true],
-    ['Drifting leaf', 1330, 1600, 40, 1.2, '#f2b134', false], ['Last leaf', 640, 1880, -20, 1.3, '#c4492c', true],
+    ['Drifting leaf', 1390, 1420, 40, 1.2, '#f2b134', false], ['Last leaf', 640, 1880, -20, 1.3, '#c4492c', true],
   ] as const;
   return {
     width: W,

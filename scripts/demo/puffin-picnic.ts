@@ -32,9 +32,9 @@ function puffin(style: PuffinStyle): DemoGroup {
         <g fill="${style.pattern}">${dots}</g><g stroke="${style.rib}" stroke-width="5">${ribs}${collar}</g>`, { clipping: true }),
       layer('Head', `<circle cx="205" cy="200" r="118" fill="${INK}"/>`),
       layer('Face', `<path d="M212,112 C292,104 326,178 310,250 C296,302 214,308 172,270 C136,236 146,122 212,112 Z" fill="#fbf7ef"/>`),
-      layer('Eye', `<path d="M222,172 L268,160 L262,170 Z" fill="#5a5e6b"/><circle cx="246" cy="190" r="16" fill="#e2553f"/>
+      layer('Eye', `<path d="M232,206 Q246,214 262,206" stroke="#5a5e6b" stroke-width="4" fill="none" stroke-linecap="round"/><circle cx="246" cy="190" r="16" fill="#e2553f"/>
         <circle cx="246" cy="190" r="10" fill="${INK}"/><circle cx="250" cy="186" r="4" fill="#ffffff"/>`),
-      layer('Beak', `<path d="M300,166 C318,176 320,256 300,264 C288,240 288,190 300,166 Z" fill="#8a8f9a"/>
+      layer('Beak', `<path d="M302,170 C312,180 314,252 302,260 C294,240 294,190 302,170 Z" fill="#8a8f9a"/>
         <path d="M306,172 C342,180 386,206 398,228 C386,246 342,258 306,258 C320,230 320,200 306,172 Z" fill="#f07d28"/>
         <path d="M334,184 C348,205 348,238 334,252" stroke="#f6c744" stroke-width="8" fill="none" stroke-linecap="round"/>`),
       layer('Cheek', `<ellipse cx="262" cy="240" rx="22" ry="13" fill="#f4a3a8"/>`, { opacity: 0.7 }),
@@ -106,8 +106,8 @@ function basket(): DemoGroup {
 function sandwich(name: string, x: number, filling: string): DemoLayer {
   return {
     name,
-    svg: `<path d="M${x},1925 L${x + 70},1790 L${x + 140},1925 Z" fill="#d9a35b"/><path d="M${x + 14},1915 L${x + 70},1808 L${x + 126},1915 Z" fill="#f6dea4"/>
-      <path d="M${x + 6},1925 L${x + 134},1925" stroke="${filling}" stroke-width="14" stroke-linecap="round"/>`,
+    svg: `<path d="M${x},1995 L${x + 70},1860 L${x + 140},1995 Z" fill="#d9a35b"/><path d="M${x + 14},1985 L${x + 70},1878 L${x + 126},1985 Z" fill="#f6dea4"/>
+      <path d="M${x + 6},1995 L${x + 134},1995" stroke="${filling}" stroke-width="14" stroke-linecap="round"/>`,
   };
 }
 
@@ -125,9 +125,9 @@ export function puffinPicnic(): DemoDocument {
       puffin({ name: 'Puffin Red Jumper', x: 200, y: 1140, mirrored: false, jumper: '#d6453d', rib: '#a8302b', pattern: '#fbf7ef' }),
       basket(),
       { name: 'Sandwiches', children: [
-        { name: 'Plate', svg: `<ellipse cx="1110" cy="1930" rx="160" ry="42" fill="#ffffff" stroke="#7fb3d5" stroke-width="8"/>` },
-        sandwich('Cucumber sandwich', 975, '#8cc152'),
-        sandwich('Tomato sandwich', 1105, '#e5533d'),
+        { name: 'Plate', svg: `<ellipse cx="1170" cy="2000" rx="165" ry="42" fill="#ffffff" stroke="#7fb3d5" stroke-width="8"/>` },
+        sandwich('Cucumber sandwich', 1030, '#8cc152'),
+        sandwich('Tomato sandwich', 1165, '#e5533d'),
       ] },
       puffin({ name: 'Puffin Teal Jumper', x: 920, y: 1170, mirrored: true, jumper: '#2a9d8f', rib: '#1f7268', pattern: '#f6c744' }),
       { name: 'Title', svg: `<path d="${textPath('Puffin Picnic', 700, 183, W / 2, 330)}" fill="#23395b"/>`,

@@ -1,12 +1,19 @@
 import type { Router } from 'express';
 import type { SharedServices } from '../app';
 import type { Runtime } from '../runtime';
+import { createCollectionsRepository } from './collections/collections.repository';
+import { collectionsRouter } from './collections/collections.router';
+import { createCollectionsService } from './collections/collections.service';
+import { createLibraryCache } from './motifs/library-cache';
 import { createMotifsRepository } from './motifs/motifs.repository';
 import { motifsRouter } from './motifs/motifs.router';
+import { createMotifsService } from './motifs/motifs.service';
 import { createOriginalsCleanup } from './originals/originals-cleanup';
 import { createOriginalsRepository } from './originals/originals.repository';
 import { originalsRouter } from './originals/originals.router';
 import { createOriginalsService } from './originals/originals.service';
+import { createTagsRepository } from './tags/tags.repository';
+import { tagsRouter } from './tags/tags.router';
 
 // Feature routers that need the queue or storage beyond the foundation's.
 export function featureRouters(runtime: Pick<Runtime, 'config' | 'db' | 'storage' | 'queue'>, _shared: SharedServices): Router[] {
@@ -17,5 +24,15 @@ export function featureRouters(runtime: Pick<Runtime, 'config' | 'db' | 'storage
     queue,
     cleanup: createOriginalsCleanup(db.db, storage),
   });
-  return [originalsRouter(originals, config), motifsRouter(createMotifsRepository(db.db), storage)];
+  // One library cache per process: each keeps itself fresh against Postgres (library-changes.ts).
+  const libraryCache = createLibraryCache(db.db);
+  const motifsRepo = createMotifsRepository(db.db);
+  const motifs = createMotifsService({ db: db.db, repo: motifsRepo, cache: libraryCache, storage });
+  const collections = createCollectionsService({ db: db.db, repo: createCollectionsRepository(db.db), cache: libraryCache });
+  return [
+    originalsRouter(originals, config),
+    motifsRouter(motifs, motifsRepo, storage),
+    tagsRouter(createTagsRepository(db.db)),
+    collectionsRouter(collections),
+  ];
 }

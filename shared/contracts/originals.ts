@@ -44,6 +44,10 @@ export const motifSummarySchema = z.object({
   thumbUrl: z.string(),
   imageUrl: z.string(),
   createdAt: z.string(),
+  // Added with the library; every summary carries them.
+  rightsStatus: z.enum(['own_work', 'licensed', 'public_domain', 'unknown']),
+  attributionRequired: z.boolean(),
+  updatedAt: z.string(),
 });
 export type MotifSummary = z.infer<typeof motifSummarySchema>;
 

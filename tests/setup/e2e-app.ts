@@ -17,17 +17,20 @@ const serverLog = path.join(testStorageRoot, 'e2e-server.log');
 // Global setup of the `e2e` project: the real app as `npm start` runs it (built client, server
 // with its job worker, demo data), on its own services and a random port.
 export default async function setup(project: TestProject): Promise<() => Promise<void>> {
+  const steps = new StepClock();
   const services = await startTestServices({ label: 'e2e' });
+  steps.done('services');
   let server: RunningChild | undefined;
   const stop = async () => {
     await server?.stop();
     await services.stop();
   };
   try {
-    const app = await startApp(services);
+    const app = await startApp(services, steps);
     server = app.server;
     project.provide('appUrl', app.appUrl);
     project.provide('inboxUrl', services.env.MAIL_INBOX_URL);
+    console.log(`e2e app ready at ${app.appUrl}: ${steps.summary()}`);
   } catch (error) {
     await stop();
     throw error;
@@ -35,7 +38,7 @@ export default async function setup(project: TestProject): Promise<() => Promise
   return stop;
 }
 
-async function startApp(services: TestServices): Promise<{ server: RunningChild; appUrl: string }> {
+async function startApp(services: TestServices, steps: StepClock): Promise<{ server: RunningChild; appUrl: string }> {
   if (!existsSync(path.join(repoRoot, 'server', 'index.ts'))) throw new Error('server/index.ts is missing');
   const port = await freePort();
   const appUrl = `http://127.0.0.1:${port}`;
@@ -49,15 +52,34 @@ async function startApp(services: TestServices): Promise<{ server: RunningChild;
     NODE_ENV: 'development',
     RUN_WORKER_IN_PROCESS: 'true',
   };
-  await ensureClientBuild({ env });
+  const built = await ensureClientBuild({ env });
+  steps.done(built ? 'client build' : 'client build (current)');
   await writeFile(serverLog, '');
   await seedDemoData({ env, logFile: serverLog });
+  steps.done('demo data');
   const server = startChild('server', process.execPath, [tsxCli, path.join('server', 'index.ts')], { env, logFile: serverLog });
   try {
     await waitForHealthy(`${appUrl}/api/health`, server);
+    steps.done('server');
   } catch (error) {
     await server.stop();
     throw new Error(`${error instanceof Error ? error.message : String(error)}; server output in ${serverLog}`);
   }
   return { server, appUrl };
+}
+
+class StepClock {
+  private last = performance.now();
+  private readonly started = this.last;
+  private readonly steps: string[] = [];
+
+  done(step: string): void {
+    const now = performance.now();
+    this.steps.push(`${step} ${((now - this.last) / 1000).toFixed(1)} s`);
+    this.last = now;
+  }
+
+  summary(): string {
+    return `${((performance.now() - this.started) / 1000).toFixed(1)} s (${this.steps.join(', ')})`;
+  }
 }

@@ -1,2 +1,3 @@
 export * from './auth';
 export * from './originals';
+export * from './library';

@@ -1,12 +1,13 @@
 import { z } from 'zod';
+import { bulkMotifsRequestSchema, motifListQuerySchema, updateMotifRequestSchema } from '../../../shared/contracts/motifs';
 import { notFound } from '../../lib/http-error';
 import { createRoutes } from '../../lib/routes';
 import type { ObjectStorage } from '../../lib/storage';
 import { studioAuth } from '../../middleware/auth';
 import { idParam } from '../../middleware/params';
-import { parseQuery } from '../../middleware/validate';
-import { toMotifSummary } from '../originals/motif-dto';
+import { parseBody, parseQuery } from '../../middleware/validate';
 import type { MotifsRepository } from './motifs.repository';
+import type { MotifsService } from './motifs.service';
 
 const imageQuery = z.object({
   size: z.enum(['full', 'thumb']).default('full'),
@@ -14,23 +15,56 @@ const imageQuery = z.object({
   download: z.enum(['1', 'true']).optional(),
 });
 
-export function motifsRouter(repo: MotifsRepository, storage: ObjectStorage) {
+function versionParam(value: unknown): number {
+  const n = typeof value === 'string' && /^\d+$/.test(value) ? Number(value) : Number.NaN;
+  if (!Number.isInteger(n) || n < 1 || n > 1_000_000) throw notFound('That motif version');
+  return n;
+}
+
+export function motifsRouter(service: MotifsService, repo: MotifsRepository, storage: ObjectStorage) {
   const r = createRoutes('/api/motifs');
+  const motifId = (req: Parameters<typeof idParam>[0]) => idParam(req, 'id', 'That motif');
 
   r.get('/', 'studio.read', async (req, res) => {
-    const rows = await repo.listCurrent(studioAuth(req).studioId);
-    res.json({ motifs: rows.map((row) => toMotifSummary(row.motif, row.version)), total: rows.length });
+    res.json(await service.list(studioAuth(req).studioId, parseQuery(req, motifListQuerySchema)));
+  });
+
+  r.post('/bulk', 'motifs.edit', async (req, res) => {
+    res.json(await service.bulk(studioAuth(req).studioId, parseBody(req, bulkMotifsRequestSchema)));
   });
 
   r.get('/:id', 'studio.read', async (req, res) => {
-    const row = await repo.findWithVersion(studioAuth(req).studioId, idParam(req, 'id', 'That motif'));
-    if (!row) throw notFound('That motif');
-    res.json(toMotifSummary(row.motif, row.version));
+    res.json(await service.detail(studioAuth(req).studioId, motifId(req)));
+  });
+
+  r.patch('/:id', 'motifs.edit', async (req, res) => {
+    const auth = studioAuth(req);
+    const id = motifId(req);
+    res.json(await service.update(auth.studioId, id, parseBody(req, updateMotifRequestSchema)));
+  });
+
+  r.delete('/:id', 'motifs.edit', async (req, res) => {
+    await service.remove(studioAuth(req).studioId, motifId(req));
+    res.status(204).end();
+  });
+
+  r.get('/:id/versions', 'studio.read', async (req, res) => {
+    res.json(await service.versions(studioAuth(req).studioId, motifId(req)));
+  });
+
+  r.post('/:id/versions/:version/restore', 'motifs.edit', async (req, res) => {
+    const auth = studioAuth(req);
+    const id = motifId(req);
+    res.json(await service.restore(auth.studioId, id, versionParam(req.params.version)));
+  });
+
+  r.get('/:id/looks-like', 'studio.read', async (req, res) => {
+    res.json(await service.looksLike(studioAuth(req).studioId, motifId(req)));
   });
 
   r.get('/:id/image', 'studio.read', async (req, res) => {
     const q = parseQuery(req, imageQuery);
-    const row = await repo.findWithVersion(studioAuth(req).studioId, idParam(req, 'id', 'That motif'), q.version);
+    const row = await repo.findWithVersion(studioAuth(req).studioId, motifId(req), q.version);
     if (!row) throw notFound('That motif');
     const key = q.size === 'thumb' ? row.version.thumbKey : row.version.pngKey;
     const object = await storage.get(key);

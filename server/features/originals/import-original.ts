@@ -7,6 +7,7 @@ import { pipeline } from 'node:stream/promises';
 import type { Database } from '../../db/client';
 import { motifs, motifVersions, originalMotifs, originals, type ImportReport } from '../../db/schema/index';
 import type { ObjectStorage } from '../../lib/storage';
+import { recordLibraryChange } from '../motifs/library-changes';
 import { matchIncomingMotifs, type KnownMotif } from './motif-matching';
 import { motifPngKey, motifThumbKey } from './motif-keys';
 import type { OriginalsRepository } from './originals.repository';
@@ -18,7 +19,17 @@ export type RunUnpack = (
   onProgress?: (p: UnpackProgress) => void,
 ) => Promise<UnpackResult>;
 
-type Deps = { db: Database; repo: OriginalsRepository; storage: ObjectStorage; runUnpack: RunUnpack; tmpRoot?: string };
+export type ImportPhaseTimings = { downloadMs: number; unpackMs: number; storageMs: number; dbMs: number; unpack?: UnpackResult['timings']; childPeakRssBytes?: number };
+
+type Deps = {
+  db: Database;
+  repo: OriginalsRepository;
+  storage: ObjectStorage;
+  runUnpack: RunUnpack;
+  tmpRoot?: string;
+  // Benches read where the time went; the product ignores it.
+  onTimings?: (timings: ImportPhaseTimings) => void;
+};
 
 export type ImportOutcome = 'imported' | 'skipped' | 'failed';
 
@@ -50,7 +61,7 @@ async function mapLimit<T>(items: T[], limit: number, fn: (item: T) => Promise<v
   await Promise.all(workers);
 }
 
-export function createOriginalImporter({ db, repo, storage, runUnpack, tmpRoot }: Deps) {
+export function createOriginalImporter({ db, repo, storage, runUnpack, tmpRoot, onTimings }: Deps) {
   async function knownMotifsOf(originalId: string): Promise<KnownMotif[]> {
     const rows = await repo.motifsOf(originalId);
     return rows.map((r) => ({ motifId: r.motif.id, name: r.motif.name, sourcePath: r.link.sourcePath, contentHash: r.version.contentHash, version: r.motif.currentVersion }));
@@ -68,16 +79,20 @@ export function createOriginalImporter({ db, repo, storage, runUnpack, tmpRoot }
     return map;
   }
 
+  // Returns each stored PNG's size in bytes, by content hash.
   async function storeMotifFiles(studioId: string, outDir: string, toStore: UnpackedMotif[], onDone: (n: number) => void) {
     let done = 0;
+    const sizes = new Map<string, number>();
     await mapLimit(toStore, 4, async (m) => {
       const [png, thumb] = await Promise.all([readFile(path.join(outDir, m.pngFile)), readFile(path.join(outDir, m.thumbFile))]);
       await Promise.all([
         storage.put(motifPngKey(studioId, m.contentHash), png, 'image/png'),
         storage.put(motifThumbKey(studioId, m.contentHash), thumb, 'image/webp'),
       ]);
+      sizes.set(m.contentHash, png.byteLength);
       onDone(++done);
     });
+    return sizes;
   }
 
   return async function importOriginal(originalId: string): Promise<ImportOutcome> {
@@ -89,11 +104,20 @@ export function createOriginalImporter({ db, repo, storage, runUnpack, tmpRoot }
       void repo.setProgress(originalId, phase, from + ((to - from) * percent) / 100).catch(() => {});
     });
     try {
+      let mark = performance.now();
+      const lap = () => {
+        const now = performance.now();
+        const ms = now - mark;
+        mark = now;
+        return ms;
+      };
       const filePath = path.join(workDir, 'original');
       const stored = await storage.get(original.storageKey);
       await pipeline(stored.body, createWriteStream(filePath));
       const outDir = path.join(workDir, 'out');
+      const downloadMs = lap();
       const result = await runUnpack({ filePath, outDir, cut: original.cut, originalName: original.name }, progress);
+      const unpackMs = lap();
 
       const previous = original.previousOriginalId ? await knownMotifsOf(original.previousOriginalId) : [];
       const studioByHash = await studioMotifsByHash(original.studioId, result.motifs.map((m) => m.contentHash));
@@ -110,12 +134,11 @@ export function createOriginalImporter({ db, repo, storage, runUnpack, tmpRoot }
         }
       });
       await repo.setProgress(originalId, 'storing', 80);
-      await storeMotifFiles(original.studioId, outDir, toStore, (n) => {
+      const pngBytes = await storeMotifFiles(original.studioId, outDir, toStore, (n) => {
         if (n % 4 === 0) void repo.setProgress(originalId, 'storing', 80 + (15 * n) / toStore.length).catch(() => {});
       });
+      const storageMs = lap();
       await repo.setProgress(originalId, 'finishing', 95);
-      const pngBytes = new Map<string, number>();
-      for (const m of toStore) pngBytes.set(m.contentHash, (await readFile(path.join(outDir, m.pngFile))).byteLength);
 
       const report: ImportReport = {
         ...result.report,
@@ -208,8 +231,11 @@ export function createOriginalImporter({ db, repo, storage, runUnpack, tmpRoot }
             importedAt: new Date(),
           })
           .where(eq(originals.id, originalId));
+        // Last in the transaction: tells every web process's library which motifs to re-read.
+        await recordLibraryChange(tx, original.studioId, links.map((l) => l.motifId));
         return true;
       });
+      onTimings?.({ downloadMs, unpackMs, storageMs, dbMs: lap(), unpack: result.timings, childPeakRssBytes: result.resources?.peakRssBytes });
       return committed ? 'imported' : 'skipped';
     } catch (err) {
       if (isUnpackError(err)) {

@@ -29,5 +29,8 @@ export function toMotifSummary(motif: MotifRow, version: VersionRow): MotifSumma
     thumbUrl: `/api/motifs/${motif.id}/image?size=thumb&version=${v}`,
     imageUrl: `/api/motifs/${motif.id}/image?version=${v}`,
     createdAt: motif.createdAt.toISOString(),
+    rightsStatus: motif.rightsStatus,
+    attributionRequired: motif.attributionRequired,
+    updatedAt: motif.updatedAt.toISOString(),
   };
 }

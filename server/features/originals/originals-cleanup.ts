@@ -2,6 +2,7 @@ import { and, eq, inArray, ne, or } from 'drizzle-orm';
 import type { Database } from '../../db/client';
 import { motifs, motifVersions, originalMotifs, originals } from '../../db/schema/index';
 import type { ObjectStorage } from '../../lib/storage';
+import { recordLibraryChange } from '../motifs/library-changes';
 import type { OriginalRow } from './originals.repository';
 
 // Deleting removes rows first, then exactly the stored objects no remaining row refers to.
@@ -54,6 +55,8 @@ export function createOriginalsCleanup(db: Database, storage: ObjectStorage) {
         }
         await tx.update(originals).set({ previousOriginalId: row.previousOriginalId }).where(eq(originals.previousOriginalId, row.id));
         await tx.delete(originals).where(eq(originals.id, row.id));
+        // Last in the transaction: its motifs left or moved to another original.
+        await recordLibraryChange(tx, row.studioId, ownIds);
       });
       await storage.remove(await unreferencedKeys([...candidateKeys]));
     },

@@ -32,7 +32,7 @@ export function StudioSwitcher() {
         items={me.studios.map((studio) => ({
           id: studio.id,
           label: studio.name,
-          hint: `You are ${roleNames[studio.role].toLowerCase()}`,
+          hint: `Your role: ${roleNames[studio.role].toLowerCase()}`,
           checked: studio.id === current?.id,
           disabled: switchStudio.isPending,
           onSelect: () => {

@@ -1,5 +1,5 @@
 import { useIsMutating } from '@tanstack/react-query';
-import { Navigate, Outlet, useLocation } from 'react-router-dom';
+import { Navigate, Outlet, useLocation, useNavigation } from 'react-router-dom';
 import { ErrorState } from '../../components/ui/error-state';
 import { LoadingState } from '../../components/ui/spinner';
 import { authKeys } from '../../features/auth/api/auth-keys';
@@ -14,7 +14,10 @@ import { TopBar } from '../layout/top-bar';
 export function AppLayout() {
   const me = useMe();
   const location = useLocation();
-  const signingOut = useIsMutating({ mutationKey: authKeys.signOut() }) > 0;
+  const navigation = useNavigation();
+  // A deliberate sign-out clears the session and then navigates to /sign-in itself; while
+  // either is under way this layout must not add its own redirect with a return path.
+  const signingOut = useIsMutating({ mutationKey: authKeys.signOut() }) > 0 || navigation.state !== 'idle';
 
   if (!me.data) {
     if (signingOut || me.isPending) {

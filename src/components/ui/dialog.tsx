@@ -68,7 +68,7 @@ export function Dialog({ open, onClose, title, description, children, actions }:
         event.preventDefault();
         onClose();
       }}
-      className="m-auto w-[min(32rem,calc(100vw-2rem))] rounded-lg border border-sand bg-paper p-0 text-ink shadow-lifted"
+      className="m-auto w-[min(32rem,calc(100vw-2rem))] rounded-lg text-left border border-sand bg-paper p-0 text-ink shadow-lifted"
     >
       {open && (
         <div className="flex flex-col gap-4 p-6">

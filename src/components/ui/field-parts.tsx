@@ -13,22 +13,26 @@ type FieldFrameProps = {
   hint?: ReactNode;
   error?: string;
   optional?: boolean;
+  /** Below the control suits a hint that changes with the value (it would shift the control). */
+  hintPlacement?: 'above' | 'below';
   children: ReactNode;
 };
 
-export function FieldFrame({ id, label, hint, error, optional, children }: FieldFrameProps) {
+export function FieldFrame({ id, label, hint, error, optional, hintPlacement = 'above', children }: FieldFrameProps) {
+  const hintText = hint && (
+    <p id={`${id}-hint`} className={hintPlacement === 'above' ? '-mt-1 text-sm text-ink-soft' : 'text-sm text-ink-soft'}>
+      {hint}
+    </p>
+  );
   return (
     <div className="flex flex-col gap-1.5">
       <label htmlFor={id} className="font-semibold text-ink">
         {label}
         {optional && <span className="ml-1 font-normal text-ink-soft">(optional)</span>}
       </label>
-      {hint && (
-        <p id={`${id}-hint`} className="-mt-1 text-sm text-ink-soft">
-          {hint}
-        </p>
-      )}
+      {hintPlacement === 'above' && hintText}
       {children}
+      {hintPlacement === 'below' && hintText}
       {error && (
         <p id={`${id}-error`} className="flex items-start gap-1.5 text-sm font-semibold text-rust">
           <svg viewBox="0 0 16 16" className="mt-0.5 size-4 shrink-0" aria-hidden="true" focusable="false">
@@ -44,7 +48,7 @@ export function FieldFrame({ id, label, hint, error, optional, children }: Field
 
 export const controlClasses =
   'w-full rounded-md border bg-paper px-3 py-2 text-base text-ink shadow-paper ' +
-  'placeholder:text-ink-soft/70 read-only:bg-shell read-only:text-ink-soft ' +
+  'placeholder:text-ink-soft/70 ' +
   'disabled:cursor-not-allowed disabled:bg-shell disabled:text-ink-soft';
 
 export function borderFor(error?: string) {

@@ -1,4 +1,4 @@
-import { useId, type ReactNode, type SelectHTMLAttributes } from 'react';
+import { useId, type ComponentPropsWithRef, type ReactNode, type SelectHTMLAttributes } from 'react';
 import { classNames } from './class-names';
 import { borderFor, controlClasses, describedBy, FieldFrame } from './field-parts';
 
@@ -9,13 +9,14 @@ type SelectFieldProps = Omit<SelectHTMLAttributes<HTMLSelectElement>, 'id'> & {
   name: string;
   options: readonly SelectOption[];
   hint?: ReactNode;
+  hintPlacement?: 'above' | 'below';
   error?: string;
 };
 
-export function SelectField({ label, hint, error, options, className, ...rest }: SelectFieldProps) {
+export function SelectField({ label, hint, hintPlacement, error, options, className, ...rest }: SelectFieldProps) {
   const id = useId();
   return (
-    <FieldFrame id={id} label={label} hint={hint} error={error}>
+    <FieldFrame id={id} label={label} hint={hint} hintPlacement={hintPlacement} error={error}>
       <Select
         id={id}
         options={options}
@@ -28,7 +29,7 @@ export function SelectField({ label, hint, error, options, className, ...rest }:
   );
 }
 
-type SelectProps = SelectHTMLAttributes<HTMLSelectElement> & { options: readonly SelectOption[] };
+type SelectProps = ComponentPropsWithRef<'select'> & { options: readonly SelectOption[] };
 
 // A bare select for places where the label sits elsewhere (a table row names it with aria-label).
 export function Select({ options, className, ...rest }: SelectProps) {

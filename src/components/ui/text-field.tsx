@@ -19,7 +19,7 @@ export function TextField({ label, hint, error, optional, className, type = 'tex
         type={type}
         aria-invalid={error ? true : undefined}
         aria-describedby={describedBy(id, hint, error)}
-        className={classNames(controlClasses, borderFor(error), className)}
+        className={classNames(controlClasses, 'read-only:bg-shell read-only:text-ink-soft', borderFor(error), className)}
         {...rest}
       />
     </FieldFrame>

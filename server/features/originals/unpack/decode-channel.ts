@@ -60,6 +60,9 @@ function decodeRle(
   data: Uint8Array, width: number, height: number, large: boolean,
   target: Uint8Array, offset: number, step: number, what: string,
 ): void {
+  // decode into a plane first (native fill/set for long runs), then spread it out: about
+  // twice as fast as writing every byte with a stride
+  const plane = step === 1 && offset === 0 ? target : scratchPlane(width * height);
   const countBytes = large ? 4 : 2;
   let position = height * countBytes;
   if (position > data.length) throw new UnpackError('psd.corrupt', `${what} ends inside its RLE row table`);
@@ -68,23 +71,49 @@ function decodeRle(
     const rowBytes = large ? view.getUint32(y * 4) : view.getUint16(y * 2);
     const rowEnd = position + rowBytes;
     if (rowEnd > data.length) throw new UnpackError('psd.corrupt', `${what} declares more RLE data than it holds`);
-    let p = offset + y * width * step;
-    const rowStop = p + width * step;
-    let i = position;
-    // PackBits: header n in 0..127 copies n+1 literal bytes; 129..255 repeats the next byte
-    // 257-n times; 128 is a no-op. Runs past the row end are cut, as readers do.
-    while (i < rowEnd && p < rowStop) {
-      const header = data[i++];
-      if (header < 128) {
-        const stop = Math.min(i + header + 1, rowEnd);
-        for (; i < stop && p < rowStop; i++, p += step) target[p] = data[i];
-        i = stop;
-      } else if (header > 128) {
-        const value = data[i++];
-        const run = 257 - header;
-        for (let j = 0; j < run && p < rowStop; j++, p += step) target[p] = value;
-      }
-    }
+    unpackBitsRow(data, position, rowEnd, plane, y * width, y * width + width);
     position = rowEnd;
   }
+  if (plane !== target) spread(plane, width * height, target, offset, step);
+}
+
+// PackBits: header n in 0..127 copies n+1 literal bytes; 129..255 repeats the next byte 257-n
+// times; 128 is a no-op. Runs past the row's end are cut, as readers do; a short row stays 0.
+function unpackBitsRow(data: Uint8Array, start: number, end: number, out: Uint8Array, p: number, stop: number): void {
+  let i = start;
+  while (i < end && p < stop) {
+    const header = data[i++];
+    if (header < 128) {
+      const n = Math.min(header + 1, end - i, stop - p);
+      if (n > 48) out.set(data.subarray(i, i + n), p);
+      else for (let j = 0; j < n; j++) out[p + j] = data[i + j];
+      i += header + 1;
+      p += n;
+    } else if (header > 128) {
+      if (i >= end) break;
+      const n = Math.min(257 - header, stop - p);
+      const value = data[i++];
+      if (n > 32) out.fill(value, p, p + n);
+      else for (let j = 0; j < n; j++) out[p + j] = value;
+      p += n;
+    }
+  }
+}
+
+function spread(plane: Uint8Array, pixels: number, target: Uint8Array, offset: number, step: number): void {
+  for (let i = 0, p = offset; i < pixels; i++, p += step) target[p] = plane[i];
+}
+
+let scratch = new Uint8Array(0);
+
+// one plane reused across channels and layers (decoding is synchronous and single-threaded)
+function scratchPlane(pixels: number): Uint8Array {
+  if (scratch.length < pixels) scratch = new Uint8Array(pixels);
+  const plane = scratch.subarray(0, pixels);
+  plane.fill(0);
+  return plane;
+}
+
+export function releaseScratchPlane(): void {
+  scratch = new Uint8Array(0);
 }

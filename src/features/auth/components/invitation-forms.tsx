@@ -36,7 +36,7 @@ export function NewAccountForm({ invitation, accept, pending }: InvitationFormPr
           {formMessage}
         </StatusMessage>
       )}
-      <TextField label="E-mail address" name="email" value={invitation.email} readOnly hint="The address this invitation was sent to." />
+      <AccountName email={invitation.email} />
       <TextField label="Your name" name="name" autoComplete="name" error={fieldErrors.name} />
       <TextField
         label="Password"
@@ -69,7 +69,7 @@ export function ExistingAccountForm({ invitation, accept, pending }: InvitationF
       <div>
         <h2 className="text-lg font-semibold">Sign in to join</h2>
         <p className="text-ink-soft">
-          You already have a Motifold account as <span className="font-semibold break-all text-ink">{invitation.email}</span>.
+          You already have a Motifold account as <span className="font-semibold wrap-anywhere text-ink">{invitation.email}</span>.
         </p>
       </div>
       {formMessage && (
@@ -77,7 +77,7 @@ export function ExistingAccountForm({ invitation, accept, pending }: InvitationF
           {formMessage}
         </StatusMessage>
       )}
-      <input type="hidden" name="username" value={invitation.email} autoComplete="username" />
+      <AccountName email={invitation.email} />
       <TextField
         label="Password"
         name="password"
@@ -95,4 +95,10 @@ export function ExistingAccountForm({ invitation, accept, pending }: InvitationF
       </div>
     </form>
   );
+}
+
+// Not shown (the invitation above names the address); lets password managers file the new
+// password under the right account.
+function AccountName({ email }: { email: string }) {
+  return <input type="text" name="username" value={email} autoComplete="username" readOnly hidden />;
 }

@@ -53,17 +53,14 @@ export function AcceptInvitationPage() {
 function InvitationSummary({ invitation }: { invitation: InvitationPreview }) {
   return (
     <div className="flex flex-col gap-3">
-      <p>
-        {invitation.invitedBy} invited you to join <span className="font-semibold text-ink">{invitation.studioName}</span>{' '}
-        as {roleNames[invitation.role].toLowerCase()}.
-      </p>
+      <p>{invitation.invitedBy} invited you to work with them in Motifold.</p>
       <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-1 rounded-md border border-sand bg-shell/60 px-4 py-3 text-sm">
         <dt className="text-ink-soft">Role</dt>
         <dd className="text-ink">
           <span className="font-semibold">{roleNames[invitation.role]}</span> · {roleSummaries[invitation.role]}
         </dd>
         <dt className="text-ink-soft">For</dt>
-        <dd className="break-all text-ink">{invitation.email}</dd>
+        <dd className="wrap-anywhere text-ink">{invitation.email}</dd>
         <dt className="text-ink-soft">Valid until</dt>
         <dd className="text-ink">{formatDay(invitation.expiresAt)}</dd>
       </dl>
@@ -98,8 +95,8 @@ function InvitationAnswer({ token, invitation, me }: AnswerProps) {
     return (
       <div className="flex flex-col gap-4">
         <StatusMessage tone="warning" title="This invitation is for someone else">
-          You are signed in as <span className="break-all">{me.user.email}</span>, but the invitation was sent to{' '}
-          <span className="break-all">{invitation.email}</span>. Sign out to accept it with that address.
+          You are signed in as <span className="wrap-anywhere">{me.user.email}</span>, but the invitation was sent to{' '}
+          <span className="wrap-anywhere">{invitation.email}</span>. Sign out to accept it with that address.
         </StatusMessage>
         {signOut.isError && <StatusMessage tone="problem">{errorMessageOf(signOut.error)}</StatusMessage>}
         <div className="flex flex-wrap gap-2">

@@ -37,7 +37,7 @@ export function ResetRequestPage() {
       <AuthPanel title="Check your inbox" footer={backToSignIn}>
         <div className="flex flex-col gap-4">
           <p>
-            If an account uses <strong className="font-semibold break-all">{sentTo}</strong>, we have sent it a link
+            If an account uses <strong className="font-semibold wrap-anywhere">{sentTo}</strong>, we have sent it a link
             to choose a new password. The link works once.
           </p>
           <p className="text-ink-soft">Nothing after a few minutes? Look in your spam folder, or send another link.</p>

@@ -13,7 +13,7 @@ import { useCreateInvitation } from '../api/create-invitation';
 const invitableRoles = createInvitationRequestSchema.shape.role.options;
 type InvitableRole = (typeof invitableRoles)[number];
 
-export function InviteForm({ studioName }: { studioName: string }) {
+export function InviteForm() {
   const [role, setRole] = useState<InvitableRole>('editor');
   const [sent, setSent] = useState<string | null>(null);
   const { formRef, fieldErrors, formMessage, showErrors, showRequestError, clearErrors } = useFormErrors();
@@ -44,13 +44,12 @@ export function InviteForm({ studioName }: { studioName: string }) {
           {formMessage}
         </StatusMessage>
       )}
-      <div className="grid gap-4 md:grid-cols-[minmax(0,1fr)_14rem]">
+      <div className="grid gap-4 md:grid-cols-[minmax(0,1fr)_16rem]">
         <TextField
           label="E-mail address"
           name="email"
           type="email"
           autoComplete="off"
-          hint={`We e-mail a link to join ${studioName}.`}
           error={fieldErrors.email}
         />
         <SelectField
@@ -60,6 +59,7 @@ export function InviteForm({ studioName }: { studioName: string }) {
           onChange={(event) => setRole(event.target.value as InvitableRole)}
           options={roleOptions(invitableRoles)}
           hint={roleSummaries[role]}
+          hintPlacement="below"
           error={fieldErrors.role}
         />
       </div>

@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { useRef, useState } from 'react';
 import { studioRoles, type StudioRole } from '@shared/auth/permissions';
 import type { Member } from '@shared/contracts/studio';
 import { Button } from '../../../components/ui/button';
@@ -21,22 +21,31 @@ type MemberRowProps = {
 
 // A role change is chosen, then saved: arrowing through a select must not change anyone's role.
 export function MemberRow({ member, isYou, canManage, onNotice, onRemove }: MemberRowProps) {
-  const [draft, setDraft] = useState<StudioRole>(member.role);
+  // null while the select shows the saved role; a role once someone picks another one.
+  const [picked, setPicked] = useState<StudioRole | null>(null);
   const [confirmingSelfDemotion, setConfirmingSelfDemotion] = useState(false);
-  const updateMember = useUpdateMember({
-    mutationConfig: {
-      onSuccess: (_, { role }) =>
-        onNotice({ tone: 'ok', text: `${isYou ? 'You are' : `${member.name} is`} now ${roleNames[role].toLowerCase()}.` }),
-      onError: (error) => {
-        setDraft(member.role);
-        onNotice({ tone: 'problem', text: errorMessageOf(error) });
-      },
-    },
-  });
+  const selectRef = useRef<HTMLSelectElement>(null);
+  // The Save button disappears once the answer is in; keep focus on this row's role.
+  const settle = (notice: Notice) => {
+    setPicked(null);
+    onNotice(notice);
+    selectRef.current?.focus();
+  };
+  const updateMember = useUpdateMember();
+  const draft = picked ?? member.role;
   const changed = draft !== member.role;
+  // Per-call callbacks run after the members list has been refetched, so the select never
+  // flashes back to the old role.
   const save = () => {
     setConfirmingSelfDemotion(false);
-    updateMember.mutate({ userId: member.userId, role: draft });
+    updateMember.mutate(
+      { userId: member.userId, role: draft },
+      {
+        onSuccess: (_, { role }) =>
+          settle({ tone: 'ok', text: `${isYou ? 'You are' : `${member.name} is`} now ${roleNames[role].toLowerCase()}.` }),
+        onError: (error) => settle({ tone: 'problem', text: errorMessageOf(error) }),
+      },
+    );
   };
 
   return (
@@ -46,17 +55,18 @@ export function MemberRow({ member, isYou, canManage, onNotice, onRemove }: Memb
           {member.name}
           {isYou && <span className="ml-1.5 font-normal text-ink-soft">(you)</span>}
         </span>
-        <span className="block text-sm break-all text-ink-soft">{member.email}</span>
+        <span className="block text-sm wrap-anywhere text-ink-soft">{member.email}</span>
       </th>
       <td className="py-3 pr-4">
         {canManage ? (
           <div className="flex items-center gap-2">
             <Select
+              ref={selectRef}
               aria-label={`Role of ${member.name}`}
               name={`role-${member.userId}`}
               value={draft}
               options={roleOptions(studioRoles)}
-              onChange={(event) => setDraft(event.target.value as StudioRole)}
+              onChange={(event) => setPicked(event.target.value as StudioRole)}
               className="w-36 border-sand py-1.5"
             />
             {changed && (

@@ -1,8 +1,8 @@
 import { useState } from 'react';
 import type { Member } from '@shared/contracts/studio';
-import { StatusMessage } from '../../../components/ui/status-message';
 import { MemberRow } from './member-row';
 import type { Notice } from './notice';
+import { NoticeArea } from './notice-area';
 import { RemoveMemberDialog } from './remove-member-dialog';
 
 type MembersTableProps = { members: Member[]; myUserId: string; studioName: string; canManage: boolean };
@@ -13,7 +13,7 @@ export function MembersTable({ members, myUserId, studioName, canManage }: Membe
 
   return (
     <div className="flex flex-col gap-4">
-      {notice && <StatusMessage tone={notice.tone}>{notice.text}</StatusMessage>}
+      <NoticeArea notice={notice} />
       <div className="overflow-x-auto">
         <table className="w-full min-w-[36rem] border-collapse">
           <caption className="sr-only">Members of {studioName}</caption>
@@ -38,7 +38,7 @@ export function MembersTable({ members, myUserId, studioName, canManage }: Membe
           <tbody>
             {members.map((member) => (
               <MemberRow
-                key={`${member.userId}:${member.role}`}
+                key={member.userId}
                 member={member}
                 isYou={member.userId === myUserId}
                 canManage={canManage}
@@ -61,6 +61,7 @@ export function MembersTable({ members, myUserId, studioName, canManage }: Membe
           setRemoving(null);
           setNotice({
             tone: 'ok',
+            focus: true,
             text: member.userId === myUserId ? `You left ${studioName}.` : `${member.name} was removed from ${studioName}.`,
           });
         }}

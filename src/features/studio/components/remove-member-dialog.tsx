@@ -15,13 +15,10 @@ type RemoveMemberDialogProps = {
 };
 
 export function RemoveMemberDialog({ member, isYou, studioName, onClose, onRemoved }: RemoveMemberDialogProps) {
-  const deleteMember = useDeleteMember({
-    mutationConfig: {
-      onSuccess: () => {
-        if (member) onRemoved(member);
-      },
-    },
-  });
+  const deleteMember = useDeleteMember();
+  // Per-call onSuccess runs once the members list is refetched, so the row is gone on close.
+  const remove = (chosen: Member) =>
+    deleteMember.mutate({ userId: chosen.userId }, { onSuccess: () => onRemoved(chosen) });
   const close = () => {
     deleteMember.reset();
     onClose();
@@ -47,7 +44,7 @@ export function RemoveMemberDialog({ member, isYou, studioName, onClose, onRemov
             variant="danger"
             busy={deleteMember.isPending}
             busyLabel="Removing…"
-            onClick={() => member && deleteMember.mutate({ userId: member.userId })}
+            onClick={() => member && remove(member)}
           >
             {isYou ? 'Leave studio' : 'Remove from studio'}
           </Button>

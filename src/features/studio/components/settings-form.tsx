@@ -6,7 +6,7 @@ import { TextField } from '../../../components/ui/text-field';
 import { checkForm, formValues } from '../../../lib/form-errors';
 import { useFormErrors } from '../../../lib/use-form-errors';
 import { useUpdateStudio } from '../api/update-studio';
-import { settingWords } from './setting-words';
+import { settingHint, settingWords } from './setting-words';
 
 const asNumber = (value: string | undefined) => (value === undefined || value.trim() === '' ? undefined : Number(value));
 
@@ -50,7 +50,7 @@ export function SettingsForm({ settings }: { settings: StudioSettings }) {
         max={64}
         step={1}
         defaultValue={settings.paletteLimit}
-        hint={settingWords.paletteLimit.hint}
+        hint={settingHint('paletteLimit')}
         error={fieldErrors.paletteLimit}
         className="max-w-32"
       />
@@ -63,7 +63,7 @@ export function SettingsForm({ settings }: { settings: StudioSettings }) {
         max={52}
         step={1}
         defaultValue={settings.readyWeeksBeforeLaunch}
-        hint={settingWords.readyWeeksBeforeLaunch.hint}
+        hint={settingHint('readyWeeksBeforeLaunch')}
         error={fieldErrors.readyWeeksBeforeLaunch}
         className="max-w-32"
       />

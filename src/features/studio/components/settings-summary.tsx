@@ -17,7 +17,9 @@ export function SettingsSummary({ settings }: { settings: StudioSettings }) {
           <dt className="font-semibold">{settingWords[row.key].label}</dt>
           <dd>
             <span className="text-ink">{row.value}</span>
-            {settingWords[row.key].hint && <span className="block text-sm text-ink-soft">{settingWords[row.key].hint}</span>}
+            {settingWords[row.key].meaning && (
+              <span className="block text-sm text-ink-soft">{settingWords[row.key].meaning}</span>
+            )}
           </dd>
         </div>
       ))}

@@ -70,8 +70,8 @@ export function MembersPage() {
           />
         </Card>
         {canManage && (
-          <Card title="Invite someone" description="They get an e-mail with a link to join; the invitation waits below until then.">
-            <InviteForm studioName={studioName} />
+          <Card title="Invite someone" description={`They get an e-mail with a link to join ${studioName}; the invitation waits below until then.`}>
+            <InviteForm />
           </Card>
         )}
         <Card title="Waiting to join">
