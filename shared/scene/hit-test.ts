@@ -34,15 +34,28 @@ export function hitTest(scene: Scene, point: TemplatePoint, options: HitTestOpti
       if (local) return { placement: p, role: 'tile', local };
       continue;
     }
-    const local = localPointIn(placementToTemplate(p), width, height, point);
+    const reach = reachOf(p, width, height);
+    const local = near(p, reach, point) ? localPointIn(placementToTemplate(p), width, height, point) : null;
     if (local) return { placement: p, role: 'placement', local };
     if (scene.layout.mirror && mirrorAxisX !== null) {
-      const mirrored = localPointIn(placementToTemplate(mirroredPlacement(p, mirrorAxisX)), width, height, point);
+      const copy = mirroredPlacement(p, mirrorAxisX);
+      const mirrored = near(copy, reach, point) ? localPointIn(placementToTemplate(copy), width, height, point) : null;
       if (mirrored) return { placement: p, role: 'mirror', local: mirrored };
     }
   }
   return null;
 }
+
+/** Half the placed box's diagonal: no point farther than this from the centre can hit, whatever the rotation. */
+function reachOf(p: Placement, width: number, height: number): number {
+  if (p.type === 'text') return Math.hypot(width, height) / 2;
+  const stretchY = p.type === 'motif' ? p.stretchY : 1;
+  return (Math.hypot(width, height * stretchY) * p.scale) / 2;
+}
+
+// The cheapest reject, before any matrix is built.
+const near = (centre: { x: number; y: number }, reach: number, point: TemplatePoint) =>
+  Math.abs(point.x - centre.x) <= reach && Math.abs(point.y - centre.y) <= reach;
 
 /** The point in a w×h box placed by `m`, or null when it falls outside (edges count as inside). */
 export function localPointIn(m: Affine, width: number, height: number, point: TemplatePoint): LocalPoint | null {

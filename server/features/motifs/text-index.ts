@@ -12,8 +12,11 @@ export const FIELD_WEIGHTS: Record<Field, number> = { name: 1, tags: 1, original
 
 const weightOf = (mask: number) => fields.reduce((best, f) => (mask & bit[f] && FIELD_WEIGHTS[f] > best ? FIELD_WEIGHTS[f] : best), 0);
 
-// Fuse threshold 0.34: one typo in three letters, two in six ("lantren" → "lantern" scores 0.29).
+// Fuse scores a match by its errors per letter (a swap of two letters is two errors): two
+// errors from six letters on ("lantren" → "lantern" scores 0.29), one from four, none in a
+// three-letter word, where one error already turns "sky" into "ske(tch)".
 const FUSE_THRESHOLD = 0.34;
+const allowedScore = (letters: number) => (letters >= 6 ? FUSE_THRESHOLD : letters >= 4 ? 0.26 : 0.01);
 // Up to this many letters a word is matched as the start of a word only: "l" or "la" as
 // someone starts typing would otherwise fuzzily match nearly everything.
 const PREFIX_ONLY_LENGTH = 2;
@@ -116,8 +119,9 @@ export class TextIndex {
       }
       return found;
     }
+    const limit = allowedScore(word.length);
     for (const { item: term, score = 1 } of this.fuse.search(word)) {
-      if (!this.postings.has(term)) continue;
+      if (score > limit || !this.postings.has(term)) continue;
       found.set(term, term === word ? 1 : term.startsWith(word) ? 0.95 : 0.85 * (1 - score));
     }
     return found;

@@ -1,6 +1,6 @@
 import { and, eq, inArray } from 'drizzle-orm';
 import { createWriteStream } from 'node:fs';
-import { mkdtemp, readFile, rm } from 'node:fs/promises';
+import { mkdir, mkdtemp, readFile, rm } from 'node:fs/promises';
 import os from 'node:os';
 import path from 'node:path';
 import { pipeline } from 'node:stream/promises';
@@ -115,6 +115,7 @@ export function createOriginalImporter({ db, repo, storage, runUnpack, tmpRoot, 
       const stored = await storage.get(original.storageKey);
       await pipeline(stored.body, createWriteStream(filePath));
       const outDir = path.join(workDir, 'out');
+      await mkdir(outDir, { recursive: true });
       const downloadMs = lap();
       const result = await runUnpack({ filePath, outDir, cut: original.cut, originalName: original.name }, progress);
       const unpackMs = lap();

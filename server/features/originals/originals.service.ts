@@ -67,7 +67,8 @@ export function createOriginalsService({ repo, storage, queue, cleanup }: Deps) 
     return {
       ...toOriginalSummary(row, rows.length),
       report: row.report ?? null,
-      motifs: rows.map((r) => ({ ...toMotifSummary(r.motif, r.version), linkedExisting: r.link.linkedExisting })),
+      // The path inside this file: a motif linked from several files keeps one name but many places.
+      motifs: rows.map((r) => ({ ...toMotifSummary(r.motif, r.version), sourcePath: r.link.sourcePath, linkedExisting: r.link.linkedExisting })),
     };
   }
 

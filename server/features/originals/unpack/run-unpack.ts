@@ -67,6 +67,7 @@ export function runUnpack(input: UnpackInput, onProgress?: (progress: UnpackProg
     child.on('error', (error) => finish(new UnpackError('unpack.crashed', `The unpack worker could not start (${error.message})`)));
     child.on('exit', (code, signal) => {
       if (settled) return;
+      if (stderr.trim()) console.error(`[unpack] child stderr (${signal ?? code}):\n${stderr.slice(-2000)}`);
       const outOfMemory = /heap out of memory|Allocation failed|Cannot allocate memory|Array buffer allocation failed/i.test(stderr);
       finish(outOfMemory
         ? new UnpackError('psd.out_of_memory', 'The file needs more memory to unpack than this server allows')

@@ -37,7 +37,11 @@ export function AcceptInvitationPage() {
           onRetry={unusable ? undefined : () => void invitation.refetch()}
           retrying={invitation.isRefetching}
         >
-          {unusable && <p className="mt-2 text-ink-soft">Ask the person who invited you to send a new invitation.</p>}
+          {unusable && (
+            <ButtonLink to="/sign-in" variant="secondary" size="sm" className="mt-4">
+              Go to sign in
+            </ButtonLink>
+          )}
         </ErrorState>
       </AuthPanel>
     );

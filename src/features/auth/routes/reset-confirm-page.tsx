@@ -18,18 +18,19 @@ export function ResetConfirmPage() {
   const [params] = useSearchParams();
   const token = params.get('token') ?? '';
   const [done, setDone] = useState(false);
-  const [linkProblem, setLinkProblem] = useState(false);
+  // The server's message when the link itself is spent (used, expired, unknown).
+  const [linkProblem, setLinkProblem] = useState<string | null>(null);
   const { formRef, fieldErrors, formMessage, showErrors, showRequestError, clearErrors } = useFormErrors();
   const confirmReset = useConfirmPasswordReset({
     mutationConfig: {
       onSuccess: () => setDone(true),
       onError: (error) => {
-        setLinkProblem(isApiRequestError(error) && linkProblems.has(error.code));
-        showRequestError(error);
+        if (isApiRequestError(error) && linkProblems.has(error.code)) setLinkProblem(error.message);
+        else showRequestError(error);
       },
     },
   });
-  useFocusHeadingWhen(done);
+  useFocusHeadingWhen(done || linkProblem);
 
   const askAgain = (
     <Link to="/forgot-password" className={textLinkClasses}>
@@ -45,10 +46,15 @@ export function ResetConfirmPage() {
     );
   }
 
-  if (!token) {
+  if (!token || linkProblem) {
     return (
-      <AuthPanel title="Choose a new password" footer={askAgain}>
-        <StatusMessage tone="problem">{brokenLink}</StatusMessage>
+      <AuthPanel title="This link cannot be used">
+        <div className="flex flex-col gap-4">
+          <StatusMessage tone="problem">{linkProblem ?? brokenLink}</StatusMessage>
+          <div>
+            <ButtonLink to="/forgot-password">Ask for a new link</ButtonLink>
+          </div>
+        </div>
       </AuthPanel>
     );
   }
@@ -59,9 +65,9 @@ export function ResetConfirmPage() {
     const check = checkForm(passwordResetConfirmSchema, { token, password: values.password });
     if (!check.ok) {
       const { token: tokenProblem, ...fields } = check.fields;
+      if (tokenProblem) return setLinkProblem(brokenLink);
       if (values.password && values.password !== values.repeatPassword) fields.repeatPassword = 'The two passwords are different';
-      setLinkProblem(Boolean(tokenProblem));
-      return showErrors(fields, tokenProblem ? brokenLink : null);
+      return showErrors(fields);
     }
     if (values.password !== values.repeatPassword) return showErrors({ repeatPassword: 'The two passwords are different' });
     clearErrors();
@@ -73,7 +79,7 @@ export function ResetConfirmPage() {
       <form ref={formRef} noValidate onSubmit={submit} className="flex flex-col gap-5">
         {formMessage && (
           <StatusMessage tone="problem" formMessage>
-            {formMessage} {linkProblem && askAgain}
+            {formMessage}
           </StatusMessage>
         )}
         <TextField

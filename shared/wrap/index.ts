@@ -1,0 +1,3 @@
+export * from './cylinder';
+export * from './wrap-views';
+export * from './column-map';

@@ -1,0 +1,20 @@
+import { afterAll, beforeAll, it } from 'vitest';
+import { seedMotifs } from '../support/library-seed';
+import { createTestApp, signUpOwner, type ApiClient, type TestApp } from '../support/test-app';
+let t: TestApp; let owner: ApiClient; let studioId: string;
+beforeAll(async () => { t = await createTestApp(); const o = await signUpOwner(t.app, 'T'); owner = o.client; studioId = o.me.studio.id; }, 60_000);
+afterAll(() => t.close());
+it('times', async () => {
+  const lap = (() => { let last = performance.now(); return (label: string) => { const now = performance.now(); console.log(label, Math.round(now - last)); last = now; }; })();
+  const { motifIds } = await seedMotifs(t.runtime.db.db, studioId, Array.from({ length: 500 }, (_, i) => ({ name: `gull ${i}`, tags: ['gull'] })));
+  lap('seed');
+  await owner.get('/api/motifs?q=gull'); lap('first list');
+  await owner.get('/api/motifs?q=gull'); lap('second list');
+  await owner.get('/api/motifs?limit=500'); lap('list 500');
+  await owner.csrf(); lap('csrf');
+  await owner.post('/api/motifs/bulk', { ids: motifIds, action: { type: 'tag', tags: ['x'] } }); lap('bulk');
+  await owner.get('/api/motifs?q=gull'); lap('list after');
+  await owner.post('/api/motifs/bulk', { ids: motifIds.slice(0, 3), action: { type: 'archive' } }); lap('bulk3');
+  await owner.get('/api/motifs?q=gull'); lap('list after');
+  await owner.get('/api/motifs?q=gull'); lap('list again');
+});
