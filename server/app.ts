@@ -40,6 +40,9 @@ const PgStore = connectPgSimple(session);
 export function createApp(deps: AppDeps): Express {
   const { config, db, storage, mailer } = deps;
   const app = express();
+  // Secure cookies and https upgrades follow the public address, not NODE_ENV: a plain-http
+  // local run must still be able to sign in.
+  const httpsOnly = config.appUrl.startsWith('https:');
   app.disable('x-powered-by');
   app.set('trust proxy', config.NODE_ENV === 'production' ? 1 : false);
 
@@ -54,7 +57,7 @@ export function createApp(deps: AppDeps): Express {
           fontSrc: ["'self'"],
           connectSrc: ["'self'"],
           workerSrc: ["'self'", 'blob:'],
-          upgradeInsecureRequests: config.NODE_ENV === 'production' ? [] : null,
+          upgradeInsecureRequests: httpsOnly ? [] : null,
         },
       },
       crossOriginEmbedderPolicy: false,
@@ -73,7 +76,7 @@ export function createApp(deps: AppDeps): Express {
       cookie: {
         httpOnly: true,
         sameSite: 'lax',
-        secure: config.NODE_ENV === 'production',
+        secure: httpsOnly,
         maxAge: 30 * 24 * 3600 * 1000,
       },
     }),

@@ -1,8 +1,8 @@
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
+// Regular and semibold are the only weights the interface uses; bundled, so no font host is asked.
 import '@fontsource/source-sans-3/400.css';
 import '@fontsource/source-sans-3/600.css';
-import '@fontsource/source-sans-3/700.css';
 import './styles.css';
 import { AppProvider } from './app/provider';
 

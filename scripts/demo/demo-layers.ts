@@ -59,11 +59,11 @@ export function textPath(text: string, weight: number, sizePx: number, x: number
 
 type Rendered = { node: DemoNode; image: RgbaImage | null; children?: Rendered[] };
 
-async function renderTree(nodes: DemoNode[], width: number, height: number): Promise<Rendered[]> {
+async function renderTree(nodes: DemoNode[], width: number, height: number, scale: number): Promise<Rendered[]> {
   const out: Rendered[] = [];
   for (const node of nodes) {
-    if (isGroup(node)) out.push({ node, image: null, children: await renderTree(node.children, width, height) });
-    else out.push({ node, image: await renderSvgLayer(node.svg, width, height) });
+    if (isGroup(node)) out.push({ node, image: null, children: await renderTree(node.children, width, height, scale) });
+    else out.push({ node, image: await renderSvgLayer(scale === 1 ? node.svg : `<g transform="scale(${scale})">${node.svg}</g>`, width, height) });
   }
   return out;
 }
@@ -92,7 +92,7 @@ function flatten(rendered: Rendered[], canvas: RgbaImage): void {
   }
 }
 
-function toPsdLayers(rendered: Rendered[]): Layer[] {
+function toPsdLayers(rendered: Rendered[], scale: number): Layer[] {
   return rendered.map(({ node, image, children }) => {
     const common: Layer = {
       name: node.name,
@@ -100,37 +100,41 @@ function toPsdLayers(rendered: Rendered[]): Layer[] {
       ...(node.blendMode ? { blendMode: node.blendMode as Layer['blendMode'] } : {}),
       ...(node.hidden ? { hidden: true } : {}),
     };
-    if (children) return { ...common, opened: true, children: toPsdLayers(children) };
+    if (children) return { ...common, opened: true, children: toPsdLayers(children, scale) };
     const layer = node as DemoLayer;
     const pixels = image
       ? { left: image.left, top: image.top, imageData: { width: image.width, height: image.height, data: new Uint8ClampedArray(image.data.buffer, image.data.byteOffset, image.data.length) } as ImageData }
       : {};
-    return { ...common, ...(layer.clipping ? { clipping: true } : {}), ...pixels, ...(layer.text ? { text: textData(layer.text) } : {}) };
+    return { ...common, ...(layer.clipping ? { clipping: true } : {}), ...pixels, ...(layer.text ? { text: textData(layer.text, scale) } : {}) };
   });
 }
 
-function textData(text: NonNullable<DemoLayer['text']>): LayerTextData {
+function textData(text: NonNullable<DemoLayer['text']>, scale: number): LayerTextData {
   return {
     text: text.content,
-    transform: [1, 0, 0, 1, text.x, text.y],
+    transform: [1, 0, 0, 1, text.x * scale, text.y * scale],
     style: { font: { name: text.fontName }, fontSize: text.sizePt, fillColor: { r: 35, g: 57, b: 91 } },
   };
 }
 
-export async function buildDemoPsd(doc: DemoDocument): Promise<Psd> {
-  const rendered = await renderTree(doc.children, doc.width, doc.height);
-  const merged: RgbaImage = { data: new Uint8Array(doc.width * doc.height * 4), width: doc.width, height: doc.height, left: 0, top: 0 };
+// `scale` draws a smaller copy (same artwork, same print size at a lower PPI), for fast tests.
+export async function buildDemoPsd(doc: DemoDocument, scale = 1): Promise<Psd> {
+  const width = Math.round(doc.width * scale);
+  const height = Math.round(doc.height * scale);
+  const ppi = Math.round(doc.ppi * scale * 100) / 100;
+  const rendered = await renderTree(doc.children, width, height, scale);
+  const merged: RgbaImage = { data: new Uint8Array(width * height * 4), width, height, left: 0, top: 0 };
   flatten(rendered, merged);
   return {
-    width: doc.width,
-    height: doc.height,
+    width,
+    height,
     imageResources: {
       resolutionInfo: {
-        horizontalResolution: doc.ppi, horizontalResolutionUnit: 'PPI', widthUnit: 'Inches',
-        verticalResolution: doc.ppi, verticalResolutionUnit: 'PPI', heightUnit: 'Inches',
+        horizontalResolution: ppi, horizontalResolutionUnit: 'PPI', widthUnit: 'Inches',
+        verticalResolution: ppi, verticalResolutionUnit: 'PPI', heightUnit: 'Inches',
       },
     },
-    imageData: { width: doc.width, height: doc.height, data: new Uint8ClampedArray(merged.data.buffer) } as ImageData,
-    children: toPsdLayers(rendered),
+    imageData: { width, height, data: new Uint8ClampedArray(merged.data.buffer) } as ImageData,
+    children: toPsdLayers(rendered, scale),
   };
 }

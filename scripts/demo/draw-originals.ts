@@ -13,11 +13,15 @@ const originals: { name: string; fileName: string; document: () => DemoDocument 
   { name: 'Lantern Walk', fileName: 'lantern-walk.psd', document: lanternWalk },
 ];
 
-export async function drawDemoOriginals(outDir: string): Promise<{ name: string; file: string }[]> {
+// options.scale < 1 draws smaller copies for tests; options.only picks originals by name
+export async function drawDemoOriginals(
+  outDir: string, options: { scale?: number; only?: string[] } = {},
+): Promise<{ name: string; file: string }[]> {
   await mkdir(outDir, { recursive: true });
   const written: { name: string; file: string }[] = [];
   for (const original of originals) {
-    const psd = await buildDemoPsd(original.document());
+    if (options.only && !options.only.includes(original.name)) continue;
+    const psd = await buildDemoPsd(original.document(), options.scale ?? 1);
     const file = join(outDir, original.fileName);
     await writeFile(file, writePsdBuffer(psd));
     written.push({ name: original.name, file });

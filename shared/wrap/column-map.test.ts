@@ -27,8 +27,12 @@ describe('column map of a wrap preview', () => {
   it('marks the unprinted gap around the handle with -1 in the back view', () => {
     const map = wrapToCylinder(cyl, 'back', { outputWidth: 400 });
     expect(map.sourceX[200]).toBe(-1); // looking straight at the handle: the gap between the strip's ends
+    // the gap is C − W = 513.05 px of arc centred on the handle: it covers |u| < r·sin(256.53/r) = 244.8 px
+    const gapHalfWidth = 487.5 * Math.sin((Math.PI * 3.25 * 300 - 2550) / 2 / 487.5);
+    const expectedPrinted = Array.from({ length: 400 }, (_, i) => ((i + 0.5) / 400) * 975 - 487.5).filter((u) => Math.abs(u) > gapHalfWidth).length;
     const printed = Array.from(map.sourceX).filter((x) => x >= 0);
-    expect(printed.length).toBeGreaterThan(200);
+    expect(printed.length).toBe(expectedPrinted);
+    expect(expectedPrinted).toBeGreaterThan(190);
     expect(printed.every((x) => x <= 2550)).toBe(true);
   });
 });

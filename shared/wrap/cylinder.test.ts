@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { radians } from '../geometry';
 import { readReferenceCsv } from '../colour/test-support/reference-csv';
 import { mug11oz, templateGeometry } from '../templates';
-import { projectArc, stripXAtScreenX, wrapAngle, wrapCylinder } from './cylinder';
+import { projectArc, projectStripX, stripXAtScreenX, wrapAngle, wrapCylinder } from './cylinder';
 
 // cylinder-wrap-examples.csv: worked values for an 11 oz mug (D = 3.25 in) from elementary
 // geometry, x = r·sin(s/r), depth r·cos(s/r), visible while |s/r| < π/2.
@@ -35,6 +35,14 @@ describe('cylinder projection', () => {
       expect(stripXAtScreenX(cyl, radians(0), Number(row.x_px_at_300ppi))).toBeCloseTo(1275 + Number(row.s_px_at_300ppi), 0);
     }
     expect(stripXAtScreenX(cyl, radians(0), 488)).toBeNull(); // beyond the silhouette (r = 487.5)
+  });
+
+  it('projects a strip x of the 11 oz wrap onto a half-size preview', () => {
+    const cyl = wrapCylinder(templateGeometry(mug11oz))!;
+    const row = rows.find((r) => r.s_in === '1.000000')!; // s = 1 in = 300 px: x = 281.42 px (reference)
+    const p = projectStripX(cyl, radians(0), 1275 + 300, 0.5);
+    expect(p.x).toBeCloseTo(Number(row.x_px_at_300ppi) / 2, 1);
+    expect(p.visible).toBe(true);
   });
 
   it('shows the unprinted gap, not the strip, where the handle is', () => {

@@ -48,6 +48,12 @@ export function projectArc(s: number, radius: number, viewAngle: Radians = radia
   return { theta, x: radius * Math.sin(theta), depth: radius * cos, visible: Math.abs(theta) < Math.PI / 2, foreshortening: cos };
 }
 
+/** Where strip x (template px) appears in a view, e.g. to draw the seam or a placement's outline on a preview; x is scaled to output pixels. */
+export function projectStripX(cyl: WrapCylinder, viewAngle: Radians, stripX: number, scale = 1): ArcProjection {
+  const p = projectArc(stripX - cyl.frontCentreX, cyl.radiusPx, viewAngle);
+  return { ...p, x: p.x * scale, depth: p.depth * scale };
+}
+
 /** Into (-π, π]. */
 export function wrapAngle(a: number): Radians {
   const t = a - 2 * Math.PI * Math.floor((a + Math.PI) / (2 * Math.PI));

@@ -34,6 +34,8 @@ export function runUnpack(input: UnpackInput, onProgress?: (progress: UnpackProg
       clearTimeout(timer);
       clearInterval(watch);
       if (child.exitCode === null && child.signalCode === null) child.kill('SIGKILL');
+      // the next spare starts once this unpack is over, so it does not compete with it for CPU
+      if (keepSpare) ensureSpare(resolveUnpackLimits().maxHeapMb);
       if (error) reject(error);
       else resolve(result!);
     };
@@ -109,7 +111,6 @@ function takeChild(heapMb: number): ChildProcess {
   } else {
     child = spawnChild(heapMb);
   }
-  if (keepSpare) ensureSpare(heapMb);
   return child;
 }
 

@@ -100,7 +100,7 @@ async function unpackMergedImage(file: Buffer, header: PsdHeader, ctx: UnpackCon
   }
   ensureAgPsdImageData();
   const bytes = header.width * header.height * 4;
-  const psd = readStructure(file, { useImageData: true, skipLayerImageData: true, totalMemoryLimit: bytes + 1024 * 1024 });
+  const psd = readStructure(file, { useImageData: true, skipLayerImageData: true, skipCompositeImageData: false, totalMemoryLimit: bytes + 1024 * 1024 });
   const parseMs = performance.now() - started;
   const pixels = psd.imageData?.data;
   if (!pixels || pixels.length !== bytes) throw new UnpackError('psd.corrupt', 'The PSD file has neither layers nor a readable merged image');
@@ -127,6 +127,10 @@ async function unpackMergedImage(file: Buffer, header: PsdHeader, ctx: UnpackCon
 }
 
 function readStructure(file: Buffer, options: Parameters<typeof readPsd>[1]): Psd {
+  // ag-psd's text-engine parser prints every odd byte of a damaged file with console.log; the
+  // read is synchronous, so muting it for the call cannot hide anyone else's output
+  const log = console.log;
+  console.log = () => {};
   try {
     return readPsd(file, { skipThumbnail: true, skipLinkedFilesData: true, skipCompositeImageData: true, ...options });
   } catch (error) {
@@ -134,6 +138,8 @@ function readStructure(file: Buffer, options: Parameters<typeof readPsd>[1]): Ps
     const reason = error instanceof Error ? error.message.replace(/[^\x20-\x7e]/g, '?').slice(0, 120) : 'unknown reason';
     const code = /exceeds file size|past end|out of range|outside the bounds/i.test(reason) ? 'psd.truncated' : 'psd.corrupt';
     throw new UnpackError(code, `The PSD file could not be read (${reason}); it is damaged or truncated`);
+  } finally {
+    console.log = log;
   }
 }
 

@@ -22,6 +22,8 @@ export type RawLayer = {
 export type RawPsd = {
   width: number; height: number; channels?: number; depth?: number; mode?: number; version?: number;
   layers: RawLayer[];
+  // merged image data after its 2-byte compression code (raw planar channels)
+  merged?: Buffer;
 };
 
 export function writeRawPsd(psd: RawPsd): Buffer {
@@ -39,7 +41,7 @@ export function writeRawPsd(psd: RawPsd): Buffer {
   if (layerInfo.length % 2) layerInfo = Buffer.concat([layerInfo, Buffer.alloc(1)]);
   const layerAndMask = Buffer.concat([u32(layerInfo.length), layerInfo, u32(0)]);
   // merged image: raw, all zero, 3 channels
-  const merged = Buffer.concat([u16(0), Buffer.alloc(psd.width * psd.height * 3 > 4096 ? 0 : psd.width * psd.height * 3)]);
+  const merged = Buffer.concat([u16(0), psd.merged ?? Buffer.alloc(psd.width * psd.height * 3 > 4096 ? 0 : psd.width * psd.height * 3)]);
   return Buffer.concat([header, u32(0), u32(0), u32(layerAndMask.length), layerAndMask, merged]);
 }
 

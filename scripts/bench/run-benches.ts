@@ -1,0 +1,28 @@
+// `npm run bench`: every speed and memory target, each printed against a peer measured in the
+// same run on this machine. Starts its own throwaway Postgres, fake S3 and fake mail.
+import { startTestServices } from '../../tests/setup/test-services';
+import { benchUnpack } from './import-bench';
+import { benchImportEndToEnd } from './import-end-to-end';
+
+const only = new Set(process.argv.slice(2));
+const wanted = (name: string) => only.size === 0 || only.has(name);
+
+const services = await startTestServices({ label: 'bench' });
+Object.assign(process.env, services.env, { NODE_ENV: 'test' });
+try {
+  if (wanted('import')) {
+    console.log('\n== Import: unpacking against ImageMagick and the ag-psd + sharp floor ==');
+    const peers = await benchUnpack();
+    console.log('\n== Import end to end (storage, queue row, unpack, S3, DB) ==');
+    await benchImportEndToEnd(peers);
+  }
+  if (wanted('library')) {
+    const mod = await import('./library-bench').catch(() => null);
+    if (mod && 'benchLibrary' in mod) {
+      console.log('\n== Library search against a plain Postgres ILIKE ==');
+      await (mod.benchLibrary as () => Promise<unknown>)();
+    }
+  }
+} finally {
+  await services.stop();
+}
