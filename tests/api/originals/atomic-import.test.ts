@@ -1,0 +1,47 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { createOriginalImporter, type RunUnpack } from '../../../server/features/originals/import-original';
+import { createOriginalsRepository } from '../../../server/features/originals/originals.repository';
+import { runUnpack } from '../../../server/features/originals/unpack/run-unpack';
+import { createTestApp, signUpOwner, type ApiClient, type TestApp } from '../support/test-app';
+import { smallCardPsd } from '../support/psd-files';
+
+let t: TestApp;
+let owner: ApiClient;
+beforeAll(async () => {
+  // No workers: the test drives the importer itself, as a worker would.
+  t = await createTestApp();
+  owner = (await signUpOwner(t.app, 'Atomic Studio')).client;
+}, 60_000);
+afterAll(() => t.close());
+
+describe('an import interrupted halfway', () => {
+  it('shows nothing of the original until a retry from the stored file commits it all at once', async () => {
+    const upload = await owner.upload('/api/originals', smallCardPsd({ kiteColour: [42, 42, 200, 255] }), 'interrupted.psd');
+    expect(upload.status).toBe(202);
+    const id = upload.body.id as string;
+    const repo = createOriginalsRepository(t.runtime.db.db);
+
+    // The storage goes away after the unpack, before anything is committed.
+    let puts = 0;
+    const failingStorage = { ...t.runtime.storage, put: async (...args: Parameters<typeof t.runtime.storage.put>) => {
+      if (++puts > 2) throw new Error('storage unreachable');
+      return t.runtime.storage.put(...args);
+    } };
+    const crashing = createOriginalImporter({ db: t.runtime.db.db, repo, storage: failingStorage, runUnpack: runUnpack as RunUnpack });
+    await expect(crashing(id)).rejects.toThrow('storage unreachable');
+
+    const during = await owner.get(`/api/originals/${id}`);
+    expect(during.body.status).toBe('queued');
+    expect(during.body.motifs).toHaveLength(0);
+    const library = await owner.get('/api/motifs');
+    expect(library.body.motifs.filter((m: { originalId: string }) => m.originalId === id)).toHaveLength(0);
+
+    const healthy = createOriginalImporter({ db: t.runtime.db.db, repo, storage: t.runtime.storage, runUnpack: runUnpack as RunUnpack });
+    expect(await healthy(id)).toBe('imported');
+    const after = await owner.get(`/api/originals/${id}`);
+    expect(after.body.status).toBe('ready');
+    expect(after.body.motifs).toHaveLength(3);
+    // A second delivery of the same job finds it done and changes nothing.
+    expect(await healthy(id)).toBe('skipped');
+  }, 60_000);
+});
