@@ -91,11 +91,8 @@ async function timeFloor(psd: BenchPsd): Promise<number> {
 async function timeOurs(psd: BenchPsd, cut: UnpackCut, warm: boolean): Promise<UnpackBenchRow['ours'][number]> {
   const dir = mkdtempSync(join(tmpdir(), 'bench-ours-'));
   try {
-    if (warm) {
-      prewarmUnpackWorker(true);
-      // let the spare child finish loading, as it would between jobs in a worker
-      await new Promise((resolve) => setTimeout(resolve, 2500));
-    }
+    // a worker keeps a loaded, warmed-up spare child between jobs
+    if (warm) await prewarmUnpackWorker(true);
     const started = performance.now();
     const result = await runUnpack({ filePath: psd.file, outDir: dir, cut });
     const ms = Math.round(performance.now() - started);

@@ -1,6 +1,7 @@
 import type { Router } from 'express';
 import type { SharedServices } from '../app';
 import type { Runtime } from '../runtime';
+import { productRouters } from './product-routers';
 import { createCollectionsRepository } from './collections/collections.repository';
 import { collectionsRouter } from './collections/collections.router';
 import { createCollectionsService } from './collections/collections.service';
@@ -34,5 +35,6 @@ export function featureRouters(runtime: Pick<Runtime, 'config' | 'db' | 'storage
     motifsRouter(motifs, motifsRepo, storage),
     tagsRouter(createTagsRepository(db.db)),
     collectionsRouter(collections),
+    ...productRouters(runtime),
   ];
 }

@@ -1,3 +1,4 @@
 export * from './auth';
 export * from './originals';
 export * from './library';
+export * from './products';

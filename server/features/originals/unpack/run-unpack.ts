@@ -57,11 +57,13 @@ export function runUnpack(input: UnpackInput, onProgress?: (progress: UnpackProg
       const parsed = childMessageSchema.safeParse(raw);
       if (!parsed.success) return finish(new UnpackError('unpack.crashed', 'The unpack worker sent a malformed answer'));
       const message = parsed.data;
+      if (message.type === 'ready') return;
       if (message.type === 'progress') {
         onProgress?.({ phase: message.phase, percent: message.percent });
       } else if (message.type === 'result') {
         const peakRssBytes = Math.max(peakRss, message.result.resources?.peakRssBytes ?? 0);
-        finish(null, { ...message.result, resources: { peakRssBytes, wallMs: Math.round(performance.now() - started) } });
+        const cpuMs = message.result.resources?.cpuMs;
+        finish(null, { ...message.result, resources: { peakRssBytes, wallMs: Math.round(performance.now() - started), ...(cpuMs !== undefined ? { cpuMs } : {}) } });
       } else {
         finish(new UnpackError(isUnpackErrorCode(message.code) ? message.code : 'unpack.crashed', message.message));
       }
@@ -90,15 +92,17 @@ export function runUnpack(input: UnpackInput, onProgress?: (progress: UnpackProg
 // Starting a child (tsx, sharp, ag-psd) takes most of a second. A long-running worker can keep
 // one spare child loaded and idle; each child still unpacks exactly one file.
 let keepSpare = false;
-let spare: { child: ChildProcess; heapMb: number } | null = null;
+let spare: { child: ChildProcess; heapMb: number; ready: Promise<void> } | null = null;
 
-export function prewarmUnpackWorker(enabled = true): void {
+// Resolves once the spare child has loaded and warmed up (or at once when switched off).
+export function prewarmUnpackWorker(enabled = true): Promise<void> {
   keepSpare = enabled;
-  if (enabled) ensureSpare(resolveUnpackLimits().maxHeapMb);
-  else if (spare) {
+  if (enabled) return ensureSpare(resolveUnpackLimits().maxHeapMb);
+  if (spare) {
     spare.child.kill('SIGKILL');
     spare = null;
   }
+  return Promise.resolve();
 }
 
 function takeChild(heapMb: number): ChildProcess {
@@ -114,21 +118,33 @@ function takeChild(heapMb: number): ChildProcess {
   return child;
 }
 
-function ensureSpare(heapMb: number): void {
-  if (spare && spare.child.exitCode === null && spare.child.connected && spare.heapMb === heapMb) return;
+function ensureSpare(heapMb: number): Promise<void> {
+  if (spare && spare.child.exitCode === null && spare.child.connected && spare.heapMb === heapMb) return spare.ready;
   spare?.child.kill('SIGKILL');
-  const child = spawnChild(heapMb);
-  // an idle spare must not keep the parent process alive
-  child.unref();
-  refChannel(child, false);
+  const child = spawnChild(heapMb, ['--warm-up']);
+  const ready = new Promise<void>((resolve) => {
+    const onMessage = (raw: unknown) => {
+      if (childMessageSchema.safeParse(raw).data?.type !== 'ready') return;
+      child.off('message', onMessage);
+      // once loaded, an idle spare must not keep the parent process alive
+      if (spare?.child === child) {
+        child.unref();
+        refChannel(child, false);
+      }
+      resolve();
+    };
+    child.on('message', onMessage);
+    child.once('exit', () => resolve());
+  });
   child.on('exit', () => {
     if (spare?.child === child) spare = null;
   });
-  spare = { child, heapMb };
+  spare = { child, heapMb, ready };
+  return ready;
 }
 
-function spawnChild(heapMb: number): ChildProcess {
-  return fork(ENTRY, [], {
+function spawnChild(heapMb: number, args: string[] = []): ChildProcess {
+  return fork(ENTRY, args, {
     execArgv: ['--import', TSX_LOADER, `--max-old-space-size=${heapMb}`],
     stdio: ['ignore', 'ignore', 'pipe', 'ipc'],
     env: childEnv(),

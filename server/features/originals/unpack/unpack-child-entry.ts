@@ -1,6 +1,7 @@
 import { isUnpackError } from './unpack-error';
 import type { ChildMessage, UnpackRequest } from './unpack-messages';
 import { unpackOriginal } from './unpack-original';
+import { warmUpUnpacker } from './unpack-warm-up';
 import type { UnpackProgress } from './unpack-result';
 
 // Entry of the unpack child process (forked by runUnpack): one request, one answer, exit.
@@ -15,6 +16,7 @@ function send(message: ChildMessage): Promise<void> {
 
 async function handle(raw: unknown): Promise<void> {
   const started = performance.now();
+  const cpuBefore = process.cpuUsage();
   const request = asRequest(raw);
   if (!request) {
     await send({ type: 'error', code: 'unpack.crashed', message: 'The unpack worker received a malformed request' });
@@ -29,7 +31,12 @@ async function handle(raw: unknown): Promise<void> {
   };
   try {
     const result = await unpackOriginal(request.input, onProgress);
-    result.resources = { peakRssBytes: process.resourceUsage().maxRSS * 1024, wallMs: Math.round(performance.now() - started) };
+    const cpu = process.cpuUsage(cpuBefore);
+    result.resources = {
+      peakRssBytes: process.resourceUsage().maxRSS * 1024,
+      wallMs: Math.round(performance.now() - started),
+      cpuMs: Math.round((cpu.user + cpu.system) / 1000),
+    };
     await send({ type: 'result', result });
   } catch (error) {
     if (isUnpackError(error)) {
@@ -58,6 +65,15 @@ function asRequest(raw: unknown): UnpackRequest | null {
 // a spare child whose parent went away has nothing left to do
 process.on('disconnect', () => process.exit(0));
 
+// a spare child warms up first, then says it is ready; requests that arrive meanwhile wait
+if (process.argv.includes('--warm-up')) {
+  try {
+    await warmUpUnpacker();
+  } catch {
+    // a failed warm-up only costs speed
+  }
+}
 process.once('message', (raw: unknown) => {
   handle(raw).finally(() => process.exit(0));
 });
+void send({ type: 'ready' });

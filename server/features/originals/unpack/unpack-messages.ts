@@ -20,6 +20,7 @@ export const unpackRequestSchema = z.object({
 });
 
 export const childMessageSchema = z.discriminatedUnion('type', [
+  z.object({ type: z.literal('ready') }),
   z.object({ type: z.literal('progress'), phase: z.enum(['reading', 'cutting', 'encoding', 'finishing']), percent: z.number() }),
   z.object({ type: z.literal('result'), result: unpackResultSchema }),
   z.object({ type: z.literal('error'), code: z.string(), message: z.string() }),

@@ -53,7 +53,7 @@ export const unpackResultSchema = z.object({
   }),
   timings: z.object({ parseMs: z.number(), cutMs: z.number(), encodeMs: z.number() }),
   // filled in by runUnpack from the child process
-  resources: z.object({ peakRssBytes: z.number(), wallMs: z.number() }).optional(),
+  resources: z.object({ peakRssBytes: z.number(), wallMs: z.number(), cpuMs: z.number().optional() }).optional(),
 });
 
 export type DominantColourValue = z.infer<typeof dominantColourSchema>;
