@@ -36,13 +36,14 @@ export function placementLocalSize(p: Placement): { width: number; height: numbe
 
 /** Maps the placement's own box (0..width, 0..height) to template pixels; for a repeat, its anchor tile. */
 export function placementToTemplate(p: Placement): Affine {
-  const { width, height } = placementLocalSize(p);
-  const transform = { x: p.x, y: p.y, width, rotationDeg: p.rotationDeg, flipX: p.flipX, flipY: p.flipY };
-  if (p.type === 'text') return placementMatrix({ ...transform, height, scale: 1 });
+  // Literal objects, not spreads: this runs for every placement on every frame of a drag.
+  if (p.type === 'text') {
+    return placementMatrix({ x: p.x, y: p.y, width: p.boxWidth, height: p.boxHeight, scale: 1, rotationDeg: p.rotationDeg, flipX: p.flipX, flipY: p.flipY });
+  }
   const stretchY = p.type === 'motif' ? p.stretchY : 1;
-  if (stretchY === 1) return placementMatrix({ ...transform, height, scale: p.scale });
+  const m = placementMatrix({ x: p.x, y: p.y, width: p.naturalWidth, height: p.naturalHeight * stretchY, scale: p.scale, rotationDeg: p.rotationDeg, flipX: p.flipX, flipY: p.flipY });
   // Stretching local y first, then centring the stretched box, is the same as a scale of (s, s·k).
-  return compose(scale(1, stretchY), placementMatrix({ ...transform, height: height * stretchY, scale: p.scale }));
+  return stretchY === 1 ? m : compose(scale(1, stretchY), m);
 }
 
 /** Axis-aligned bounds in template pixels of the (possibly rotated) box. */

@@ -3,7 +3,7 @@ import { compose, translate, type Affine, type Rect } from '../geometry';
 import { pointsToPixels, templateGeometry, type PixelSize, type Template, type TemplateGeometry } from '../templates';
 import type { Scene } from './layout';
 import type { BlendMode } from './placement-base';
-import { placementLocalSize, placementToTemplate, type Placement } from './placement';
+import { placementToTemplate, type Placement } from './placement';
 import { MAX_REPEAT_TILES, repeatTiles } from './repeat-tiles';
 import type { TextPlacement } from './text-placement';
 
@@ -94,20 +94,15 @@ export function renderPlan(scene: Scene, template: Template, options: RenderPlan
 }
 
 function opFor(p: Placement, matrix: Affine, role: DrawRole, clip: Rect | null, dpi: number): DrawOp {
-  const { width, height } = placementLocalSize(p);
-  const base = { placementId: p.id, role, matrix, width, height, opacity: p.opacity, blendMode: p.blendMode, clip };
+  // Literal objects, not spreads: plans are rebuilt on every frame of a drag.
   if (p.type === 'text') {
     return {
-      ...base,
-      kind: 'text',
-      content: p.content,
-      fontId: p.fontId,
-      sizePx: pointsToPixels(p.sizePt, dpi),
-      colour: p.colour,
-      align: p.align,
-      letterSpacing: p.letterSpacing,
-      arcDeg: p.arcDeg,
+      kind: 'text', placementId: p.id, role, matrix, width: p.boxWidth, height: p.boxHeight, opacity: p.opacity, blendMode: p.blendMode, clip,
+      content: p.content, fontId: p.fontId, sizePx: pointsToPixels(p.sizePt, dpi), colour: p.colour, align: p.align, letterSpacing: p.letterSpacing, arcDeg: p.arcDeg,
     };
   }
-  return { ...base, kind: 'motif', motifId: p.motifId, version: p.version, recolour: p.recolour };
+  return {
+    kind: 'motif', placementId: p.id, role, matrix, width: p.naturalWidth, height: p.naturalHeight, opacity: p.opacity, blendMode: p.blendMode, clip,
+    motifId: p.motifId, version: p.version, recolour: p.recolour,
+  };
 }

@@ -53,7 +53,8 @@ export function forgetCsrfToken(): void {
   csrfRequest = null;
 }
 
-async function getCsrfToken(): Promise<string> {
+// Exported for the upload helper (upload-request.ts), which sends through XMLHttpRequest.
+export async function getCsrfToken(): Promise<string> {
   if (csrfToken) return csrfToken;
   csrfRequest ??= send('/auth/csrf', { method: 'GET' })
     .then((response) => readBody(response, csrfResponseSchema))
@@ -89,7 +90,11 @@ async function send(path: string, options: RequestOptions, token?: string): Prom
 }
 
 async function readError(response: Response): Promise<ApiRequestError> {
-  const text = await response.text().catch(() => '');
+  return apiErrorFromText(response.status, await response.text().catch(() => ''));
+}
+
+// Reads an error answer from its status and body text; shared with the upload helper.
+export function apiErrorFromText(status: number, text: string): ApiRequestError {
   let json: unknown = undefined;
   try {
     json = text ? JSON.parse(text) : undefined;
@@ -97,12 +102,12 @@ async function readError(response: Response): Promise<ApiRequestError> {
     // A proxy or crashed server answers with HTML or nothing; fall through to a generic message.
   }
   const parsed = apiErrorSchema.safeParse(json);
-  if (parsed.success) return new ApiRequestError({ status: response.status, ...parsed.data.error });
-  if (response.status === 502 || response.status === 503 || response.status === 504) return unreachable();
+  if (parsed.success) return new ApiRequestError({ status, ...parsed.data.error });
+  if (status === 0 || status === 502 || status === 503 || status === 504) return unreachable();
   return new ApiRequestError({
-    status: response.status,
+    status,
     code: 'response.unexpected',
-    message: `Something went wrong on our side (HTTP ${response.status}). Try again in a moment.`,
+    message: `Something went wrong on our side (HTTP ${status}). Try again in a moment.`,
   });
 }
 

@@ -68,5 +68,6 @@ describe('tag suggestions from layer and group names', () => {
   it('keeps non-English words whole and drops duplicates', () => {
     expect(suggestTags(['Füchse im Wald', 'Wald', 'Laterne 2'])).toEqual(['füchse', 'im', 'wald', 'laterne']);
     expect(suggestTags(['HTMLTitle', 'KiteString'])).toEqual(['html', 'title', 'kite', 'string']);
+    expect(suggestTags(['Little Fox with Lantern', 'Lantern Walk'])).toEqual(['little', 'fox', 'lantern', 'walk']);
   });
 });

@@ -68,3 +68,24 @@ describe('layer masks', () => {
     expect(Array.from(png.data)).toEqual([90, 90, 90, 255, 90, 90, 90, 51]);
   });
 });
+
+describe('header cases ag-psd alone would refuse or misread', () => {
+  it('unpacks a layered file whose header declares more than 16 channels (the spec allows 56)', async () => {
+    const file = join(dir, 'many-channels.psd');
+    writeFileSync(file, writeRawPsd({
+      width: 2, height: 1, channels: 20,
+      layers: [{ top: 0, left: 0, bottom: 1, right: 2, name: 'Ink', channels: [0, 1, 2].map((id) => rawChannel(id, new Uint8Array([7, 9]))) }],
+    }));
+    const result = await unpackOriginal({ filePath: file, outDir: mkdtempSync(join(dir, 'out-')), cut: 'layers' });
+    expect(result.motifs.map((m) => [m.name, m.width])).toEqual([['Ink', 2]]);
+  });
+
+  it('refuses a CMYK file with the mode named, before reading its layers', async () => {
+    const file = join(dir, 'cmyk.psd');
+    writeFileSync(file, writeRawPsd({ width: 2, height: 1, channels: 4, mode: 4, layers: [] }));
+    await expect(unpackOriginal({ filePath: file, outDir: dir, cut: 'layers' })).rejects.toMatchObject({
+      code: 'psd.unsupported_mode',
+      message: 'CMYK PSD files are not supported; convert the document to RGB colour and upload it again',
+    });
+  });
+});

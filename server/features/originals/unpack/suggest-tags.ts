@@ -1,6 +1,9 @@
 // Words that name a layer's role in the file, not its artwork: an editor's default names
-// ("Layer 3 copy", "Group 2") and our own fallbacks.
-const NOISE_WORDS = new Set(['layer', 'layers', 'copy', 'group', 'unnamed', 'untitled']);
+// ("Layer 3 copy", "Group 2") and our own fallbacks; and English joining words ("Fox with Lantern").
+const NOISE_WORDS = new Set([
+  'layer', 'layers', 'copy', 'group', 'unnamed', 'untitled',
+  'the', 'and', 'with', 'of', 'on', 'in', 'for', 'to', 'at', 'by', 'an',
+]);
 
 // Tag suggestions from a motif's own name first, then its groups' names, innermost first.
 export function suggestTags(names: readonly string[]): string[] {

@@ -1,4 +1,4 @@
-import { open, stat, readFile } from 'node:fs/promises';
+import { mkdir, open, readFile, stat } from 'node:fs/promises';
 import { SNIFF_BYTES, sniffFileType } from './sniff-file-type';
 import { unpackFlatImage } from './unpack-flat-image';
 import { UnpackError } from './unpack-error';
@@ -23,6 +23,7 @@ export async function unpackOriginal(input: UnpackInput, onProgress?: (progress:
   if (size > limits.maxFileBytes) {
     throw new UnpackError('upload.too_large', `The file is ${Math.round(size / 1048576)} MB; this server accepts up to ${Math.round(limits.maxFileBytes / 1048576)} MB`);
   }
+  await mkdir(input.outDir, { recursive: true });
   const head = await readHead(input.filePath);
   const type = sniffFileType(head);
   const ctx = { outDir: input.outDir, cut: input.cut, limits, originalName: input.originalName, onProgress };

@@ -1,0 +1,30 @@
+/** Which non-printing guides the canvas draws; each is a toggle in the toolbar. */
+export type OverlaySettings = {
+  readonly bleed: boolean;
+  readonly trim: boolean;
+  readonly safeArea: boolean;
+  readonly printArea: boolean;
+  readonly keepOuts: boolean;
+  readonly seam: boolean;
+  readonly frontCentre: boolean;
+  readonly rulers: boolean;
+};
+
+export type OverlayName = keyof OverlaySettings;
+
+export const defaultOverlays: OverlaySettings = {
+  bleed: true, trim: true, safeArea: true, printArea: true, keepOuts: true, seam: true, frontCentre: true, rulers: true,
+};
+
+export const overlayLabels: Record<OverlayName, string> = {
+  bleed: 'Bleed',
+  trim: 'Trim line',
+  safeArea: 'Safe area',
+  printArea: 'Print area',
+  keepOuts: 'Keep-out zones',
+  seam: 'Wrap seam',
+  frontCentre: 'Front centre',
+  rulers: 'Rulers',
+};
+
+export type RulerUnit = 'in' | 'mm';

@@ -1,0 +1,4 @@
+export const tagKeys = {
+  all: ['tags'] as const,
+  list: () => [...tagKeys.all, 'list'] as const,
+};
