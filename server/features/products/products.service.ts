@@ -6,6 +6,9 @@ import { badRequest, conflict, notFound } from '../../lib/http-error';
 import type { TemplatesService } from '../templates/templates.service';
 import type { MotifUse, ProductRow, ProductsRepository } from './products.repository';
 
+// The detail as the server holds it: the layout stays the shared, read-only scene type.
+export type ProductView = Omit<ProductDetail, 'layout'> & { layout: Layout };
+
 function motifUses(layout: Layout): MotifUse[] {
   return layout.placements.flatMap((p) => (p.type === 'motif' || p.type === 'repeat' ? [{ motifId: p.motifId, placementId: p.id, version: p.version }] : []));
 }
@@ -32,7 +35,7 @@ export function createProductsService(repo: ProductsRepository, templates: Templ
     });
   }
 
-  async function detail(studioId: string, id: string): Promise<ProductDetail> {
+  async function detail(studioId: string, id: string): Promise<ProductView> {
     const row = await repo.find(studioId, id);
     if (!row) throw notFound('That product');
     const template = await templateOf(studioId, row.templateId);
