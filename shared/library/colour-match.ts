@@ -5,13 +5,18 @@ export type PaletteEntry = { hex: string; share: number; lab: Lab };
 export type ColourMatchResult = { hex: string; share: number; deltaE: number; rank: number };
 
 // ΔE00 ≥ |ΔL*| / S_L, because the chroma and hue terms with the rotation term form a
-// non-negative quadratic (|R_T| < 2), and S_L (Sharma et al. 2005, eq. 16) is at most
-// 1 + 0.015·50² / √(20 + 50²) ≈ 1.747 over L* 0–100. So a colour whose lightness alone is
-// farther than 1.75 × the limit cannot match, and the full formula is skipped for it.
+// non-negative quadratic (|R_T| < 2), with S_L = 1 + 0.015 (L̄ − 50)² / √(20 + (L̄ − 50)²)
+// (Sharma et al. 2005, eq. 16). S_L is at most ≈ 1.747 over L* 0–100, which rules most colours
+// out with one subtraction; the exact S_L of the pair rules out more, and only the rest need
+// the full formula.
 export const MAX_LIGHTNESS_WEIGHT = 1 + (0.015 * 2500) / Math.sqrt(2520);
 
 export function lightnessRulesOut(target: Lab, candidate: Lab, maxDistance: number): boolean {
-  return Math.abs(target.l - candidate.l) > maxDistance * MAX_LIGHTNESS_WEIGHT;
+  const dL = Math.abs(target.l - candidate.l);
+  if (dL > maxDistance * MAX_LIGHTNESS_WEIGHT) return true;
+  const m = (target.l + candidate.l) / 2 - 50;
+  const sL = 1 + (0.015 * m * m) / Math.sqrt(20 + m * m);
+  return dL / sL > maxDistance;
 }
 
 // A motif matches through its best palette colour within maxDistance. Ranking adds up to half the

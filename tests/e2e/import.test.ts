@@ -46,7 +46,120 @@ describe('importing a layered PSD as the demo editor', () => {
     expect(original.percent).toBe(100);
     await expectMotifsOfCard(api, original, card.motifs);
   });
+
+  it('takes a dropped file, uploads it with a progress bar, follows the import and shows the motifs', async () => {
+    const card = layeredCard(2, 4);
+    const fileName = 'Spring card 2.psd';
+    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Originals' }).click();
+    await page.getByRole('heading', { level: 1, name: 'Originals' }).waitFor();
+    await page.getByRole('heading', { name: 'Add an original' }).waitFor();
+
+    // Dragging a file over the zone, then dropping it, as a browser does.
+    const zone = page.getByTestId('drop-zone');
+    const dataTransfer = await page.evaluateHandle(
+      ({ base64, name }) => {
+        const bytes = Uint8Array.from(atob(base64), (c) => c.charCodeAt(0));
+        const transfer = new DataTransfer();
+        transfer.items.add(new File([bytes], name, { type: 'image/vnd.adobe.photoshop' }));
+        return transfer;
+      },
+      { base64: card.psd.toString('base64'), name: fileName },
+    );
+    await zone.dispatchEvent('dragenter', { dataTransfer });
+    await page.getByText('Let go to add this file').waitFor();
+    await browser.screenshot(page, 'import-01-dragging-over');
+    await zone.dispatchEvent('drop', { dataTransfer });
+    await page.getByText(fileName, { exact: true }).waitFor();
+    expect(await page.getByRole('radio', { name: /One motif per layer group/ }).isChecked()).toBe(true);
+
+    // The same file again through the button and the browser's file chooser.
+    await page.getByRole('button', { name: 'Choose another file' }).click();
+    const chooser = page.waitForEvent('filechooser');
+    await page.getByRole('button', { name: 'Choose a file…' }).click();
+    await (await chooser).setFiles({ name: fileName, mimeType: 'image/vnd.adobe.photoshop', buffer: card.psd });
+    await page.getByText(fileName, { exact: true }).waitFor();
+    await browser.screenshot(page, 'import-02-file-chosen');
+
+    await recordProgressBars(page);
+    await page.getByRole('button', { name: 'Upload and import' }).click();
+    const imports = page.getByRole('region', { name: 'Imports started here' });
+    // Best effort: a small import may be over before the bar can be photographed.
+    const importBar = imports.getByRole('progressbar');
+    if (await importBar.first().waitFor({ timeout: 5_000 }).then(() => true, () => false)) {
+      await browser.screenshot(page, 'import-02b-importing').catch(() => undefined);
+    }
+    const done = imports.getByRole('status').filter({ hasText: `${fileName} is imported` });
+    await done.waitFor({ timeout: 30_000 });
+    expect(await done.innerText()).toContain(`${card.motifs.length} motifs are in the library now.`);
+    await browser.screenshot(page, 'import-03-imported');
+
+    const bars = await progressBarsSeen(page);
+    expect(bars.some((bar) => bar.label.startsWith(`Uploading ${fileName}`) || bar.label.startsWith('Sent;'))).toBe(true);
+    // The import's own bar names its phase (the words of import-words.ts).
+    expect(bars.some((bar) => bar.label.startsWith(`${fileName} ·`))).toBe(true);
+    expect(bars.every((bar) => bar.value === null || (Number(bar.value) >= 0 && Number(bar.value) <= 100))).toBe(true);
+
+    // The list of all originals has it, ready, with its motif count.
+    const row = page.getByRole('row').filter({ has: page.getByRole('link', { name: fileName, exact: true }) });
+    await row.filter({ hasText: 'Ready' }).waitFor();
+    expect(await row.innerText()).toContain(String(card.motifs.length));
+
+    await done.getByRole('link', { name: 'See its motifs and import report' }).click();
+    await page.waitForURL((url) => url.pathname.startsWith('/originals/'));
+    for (const motif of card.motifs) {
+      await page.getByText(motif.name, { exact: true }).first().waitFor();
+    }
+    // A layer name with markup is shown as the text it is, never as markup.
+    expect(await page.locator('i', { hasText: 'band' }).count()).toBe(0);
+    await expectThumbnailsLoaded(page, card.motifs.length);
+    await browser.screenshot(page, 'import-04-original-motifs');
+  });
+
+  it('refuses a file that is not an original before sending any byte', async () => {
+    await page.goto(`${appUrl}/originals`);
+    await page.getByRole('heading', { name: 'Add an original' }).waitFor();
+    const chooser = page.waitForEvent('filechooser');
+    await page.getByRole('button', { name: 'Choose a file…' }).click();
+    await (await chooser).setFiles({ name: 'notes.txt', mimeType: 'text/plain', buffer: Buffer.from('not a picture') });
+    const problem = page.getByTestId('drop-zone').getByRole('alert');
+    await problem.waitFor();
+    expect((await problem.innerText()).length).toBeGreaterThan(10);
+    expect(await page.getByRole('button', { name: 'Upload and import' }).count()).toBe(0);
+    await browser.screenshot(page, 'import-05-not-an-original');
+  });
 });
+
+type ProgressBarSeen = { label: string; value: string | null };
+
+// Every state of every progress bar, kept in the page: a small import can pass in a blink.
+async function recordProgressBars(page: Page): Promise<void> {
+  await page.evaluate(() => {
+    const seen: { label: string; value: string | null }[] = [];
+    Object.assign(window, { progressBarsSeen: seen });
+    const record = () => {
+      for (const bar of document.querySelectorAll('[role="progressbar"]')) {
+        const labelId = bar.getAttribute('aria-labelledby');
+        const label = (labelId && document.getElementById(labelId)?.textContent) || '';
+        const value = bar.getAttribute('aria-valuenow');
+        if (!seen.some((s) => s.label === label && s.value === value)) seen.push({ label, value });
+      }
+    };
+    new MutationObserver(record).observe(document.body, { subtree: true, childList: true, attributes: true, characterData: true });
+  });
+}
+
+async function progressBarsSeen(page: Page): Promise<ProgressBarSeen[]> {
+  return page.evaluate(() => (window as unknown as { progressBarsSeen: { label: string; value: string | null }[] }).progressBarsSeen);
+}
+
+async function expectThumbnailsLoaded(page: Page, count: number): Promise<void> {
+  const thumbnails = page.locator('main img');
+  await page.waitForFunction(
+    (n) => [...document.querySelectorAll('main img')].filter((img) => (img as HTMLImageElement).naturalWidth > 0).length >= n,
+    count,
+  );
+  expect(await thumbnails.count()).toBeGreaterThanOrEqual(count);
+}
 
 type Seen = { status: string; phase: string; percent: number; motifCount: number };
 

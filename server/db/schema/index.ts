@@ -2,3 +2,4 @@ export * from './auth';
 export * from './originals';
 export * from './library';
 export * from './products';
+export * from './exports';

@@ -1,7 +1,4 @@
-import { hexToRgb } from '../../../shared/colour/srgb';
-import { rgbToLab } from '../../../shared/colour/lab';
-import { rightsStatuses, type ColourMatch, type MotifFacets, type MotifFilter, type MotifListQuery, type MotifSort } from '../../../shared/contracts/motifs';
-import { bestColourMatch } from '../../../shared/library/colour-match';
+import { rightsStatuses, type ColourMatch, type MotifFacets, type MotifFilter, type MotifListQuery } from '../../../shared/contracts/motifs';
 import type { LibraryRecord } from './library-records';
 import type { StudioLibrary } from './studio-library';
 
@@ -21,41 +18,42 @@ function passesFilters(r: LibraryRecord, f: MotifFilter): boolean {
   return true;
 }
 
-// Words, then the cheap filters, then colour (the costly one) over what is left. Also counts the
-// archived motifs that match everything else, so the "archived" filter can say how many it hides.
-export function matchMotifs(library: StudioLibrary, f: MotifFilter): { hits: MotifHit[]; archivedMatching: number } {
-  const textScores = f.q ? library.text.search(f.q) : null;
-  const target = f.colour ? rgbToLab(hexToRgb(f.colour)) : null;
+// Walks the motifs in the given order and keeps those matching the words, the filters and the
+// colour. Also counts the archived motifs that match everything else, so the "archived" filter
+// can say how many it hides.
+export function matchMotifs(
+  library: StudioLibrary,
+  f: MotifFilter,
+  order = library.inOrder('newest'),
+  textScores = f.q ? library.text.search(f.q) : null,
+): { hits: MotifHit[]; archivedMatching: number } {
+  const colours = f.colour ? library.colourMatches(f.colour, f.maxDistance) : null;
   const hits: MotifHit[] = [];
   let archivedMatching = 0;
-  const consider = (r: LibraryRecord, score: number | null) => {
-    if (!passesFilters(r, f)) return;
+  for (const r of order) {
+    let score: number | null = null;
+    if (textScores) {
+      const found = textScores.get(r.motif.id);
+      if (found === undefined) continue;
+      score = Math.round(found * 1000) / 1000;
+    }
+    if (!passesFilters(r, f)) continue;
     let colourMatch: ColourMatch | null = null;
     let colourRank: number | null = null;
-    if (target) {
-      const match = bestColourMatch(target, r.palette, f.maxDistance);
-      if (!match) return;
+    if (colours) {
+      const match = colours.get(r.motif.id);
+      if (!match) continue;
       colourMatch = { hex: match.hex, share: match.share, deltaE: Math.round(match.deltaE * 100) / 100 };
       colourRank = match.rank;
     }
-    if (r.motif.archived) archivedMatching++;
-    if (f.archived === 'exclude' && r.motif.archived) return;
-    if (f.archived === 'only' && !r.motif.archived) return;
+    if (r.motif.archived) {
+      archivedMatching++;
+      if (f.archived === 'exclude') continue;
+    } else if (f.archived === 'only') continue;
     hits.push({ record: r, score, colourMatch, colourRank });
-  };
-  if (textScores) {
-    for (const [id, score] of textScores) {
-      const r = library.records.get(id);
-      if (r) consider(r, Math.round(score * 1000) / 1000);
-    }
-  } else {
-    for (const r of library.records.values()) consider(r, null);
   }
   return { hits, archivedMatching };
 }
-
-const newest = (a: MotifHit, b: MotifHit) => b.record.createdMs - a.record.createdMs || (a.record.motif.id < b.record.motif.id ? -1 : 1);
-const byName = (a: MotifHit, b: MotifHit) => (a.record.nameKey < b.record.nameKey ? -1 : a.record.nameKey > b.record.nameKey ? 1 : newest(a, b));
 
 // "best": with words and a colour, relevance scaled by colour closeness; otherwise whichever was asked.
 function bestValue(hit: MotifHit, maxDistance: number): number {
@@ -63,14 +61,18 @@ function bestValue(hit: MotifHit, maxDistance: number): number {
   return (hit.score ?? 1) * colourCloseness;
 }
 
-export function sortHits(hits: MotifHit[], sort: MotifSort, maxDistance: number): MotifHit[] {
-  if (sort === 'newest') return hits.sort(newest);
-  if (sort === 'name') return hits.sort(byName);
-  if (sort === 'most_used') return hits.sort((a, b) => b.record.usageCount - a.record.usageCount || byName(a, b));
-  const ranked = hits.some((h) => h.score !== null || h.colourRank !== null);
-  if (!ranked) return hits.sort(newest);
-  const value = new Map(hits.map((h) => [h, bestValue(h, maxDistance)]));
-  return hits.sort((a, b) => value.get(b)! - value.get(a)! || newest(a, b));
+// Hits arrive in the walk's order (newest, or by name for name and most used); sorts are stable,
+// so that order breaks ties.
+function rank(hits: MotifHit[], query: MotifListQuery, ranked: boolean): MotifHit[] {
+  if (query.sort === 'most_used') return hits.sort((a, b) => b.record.usageCount - a.record.usageCount);
+  if (!ranked) return hits;
+  const values = new Float64Array(hits.length);
+  const indexed = hits.map((hit, i) => {
+    values[i] = bestValue(hit, query.maxDistance);
+    return i;
+  });
+  indexed.sort((a, b) => values[b] - values[a] || a - b);
+  return indexed.map((i) => hits[i]);
 }
 
 function topCounts<K>(counts: Map<K, number>, limit = FACET_LIMIT): [K, number][] {
@@ -108,10 +110,13 @@ export function facetsOf(library: StudioLibrary, hits: readonly MotifHit[], arch
 }
 
 export function queryLibrary(library: StudioLibrary, query: MotifListQuery) {
-  const { hits, archivedMatching } = matchMotifs(library, query);
+  const textScores = query.q ? library.text.search(query.q) : null;
+  const ranked = query.sort === 'best' && (Boolean(query.colour) || textScores !== null);
+  const order = library.inOrder(query.sort === 'name' || query.sort === 'most_used' ? 'name' : 'newest');
+  const { hits, archivedMatching } = matchMotifs(library, query, order, textScores);
   const facets = facetsOf(library, hits, archivedMatching);
-  sortHits(hits, query.sort, query.maxDistance);
-  const page = hits.slice(query.offset, query.offset + query.limit);
+  const sorted = rank(hits, query, ranked);
+  const page = sorted.slice(query.offset, query.offset + query.limit);
   const end = query.offset + page.length;
   return { page, total: hits.length, nextOffset: end < hits.length ? end : null, facets };
 }

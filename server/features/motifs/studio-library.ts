@@ -1,3 +1,6 @@
+import { hexToRgb } from '../../../shared/colour/srgb';
+import { rgbToLab } from '../../../shared/colour/lab';
+import { bestColourMatch, type ColourMatchResult } from '../../../shared/library/colour-match';
 import { nearDuplicates } from '../../../shared/library/near-duplicates';
 import type { LibraryRecord } from './library-records';
 import { TextIndex } from './text-index';
@@ -8,6 +11,9 @@ export class StudioLibrary {
   readonly records = new Map<string, LibraryRecord>();
   readonly text = new TextIndex();
   collectionNames = new Map<string, string>();
+  // Derived views, dropped whenever a motif changes.
+  private orders: Partial<Record<'newest' | 'name', LibraryRecord[]>> = {};
+  private colourResults = new Map<string, Map<string, ColourMatchResult>>();
 
   constructor(
     readonly studioId: string,
@@ -25,13 +31,48 @@ export class StudioLibrary {
       if (seen.has(id)) continue;
       this.records.delete(id);
       this.text.remove(id);
+      this.changed();
     }
   }
 
+  private changed() {
+    this.orders = {};
+    this.colourResults.clear();
+  }
+
   upsert(record: LibraryRecord) {
+    this.changed();
     const m = record.motif;
     this.records.set(m.id, record);
     this.text.set(m.id, { name: m.name, tags: m.tags, originalName: record.originalName, sourcePath: m.sourcePath, notes: m.notes });
+  }
+
+  // Every motif, newest first or by name; kept until the next change, so listing walks a ready order.
+  inOrder(order: 'newest' | 'name'): readonly LibraryRecord[] {
+    const cached = this.orders[order];
+    if (cached) return cached;
+    const all = [...this.records.values()];
+    const newest = (a: LibraryRecord, b: LibraryRecord) => b.createdMs - a.createdMs || (a.motif.id < b.motif.id ? -1 : 1);
+    all.sort(order === 'newest' ? newest : (a, b) => (a.nameKey < b.nameKey ? -1 : a.nameKey > b.nameKey ? 1 : newest(a, b)));
+    this.orders[order] = all;
+    return all;
+  }
+
+  // Each motif's best match for a colour. Paging through or narrowing a colour search asks the
+  // same question again, so the last few answers are kept until the library changes.
+  colourMatches(hex: string, maxDistance: number): Map<string, ColourMatchResult> {
+    const key = `${hex}/${maxDistance}`;
+    const cached = this.colourResults.get(key);
+    if (cached) return cached;
+    const target = rgbToLab(hexToRgb(hex));
+    const matches = new Map<string, ColourMatchResult>();
+    for (const [id, r] of this.records) {
+      const match = bestColourMatch(target, r.palette, maxDistance);
+      if (match) matches.set(id, match);
+    }
+    if (this.colourResults.size >= 8) this.colourResults.delete(this.colourResults.keys().next().value!);
+    this.colourResults.set(key, matches);
+    return matches;
   }
 
   looksLike(motifId: string, maxBits?: number) {

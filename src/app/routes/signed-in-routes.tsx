@@ -1,5 +1,8 @@
 import type { QueryClient } from '@tanstack/react-query';
 import type { RouteObject } from 'react-router-dom';
+import { libraryLoader, libraryShouldRevalidate } from '../../features/library/routes/loaders';
+import { motifLoader } from '../../features/motifs/routes/loaders';
+import { originalLoader, originalsLoader } from '../../features/originals/routes/loaders';
 import { membersLoader, settingsLoader } from '../../features/studio/routes/loaders';
 
 // Pages inside the studio (top bar, signed-in guard). To add a feature's page: add an entry
@@ -12,18 +15,39 @@ export const signedInRoutes = (queryClient: QueryClient): RouteObject[] => [
   },
   {
     path: 'library',
+    loader: libraryLoader(queryClient),
+    shouldRevalidate: libraryShouldRevalidate,
     lazy: { Component: () => import('../../features/library/routes/library-page').then((m) => m.LibraryPage) },
   },
   {
+    path: 'library/:motifId',
+    loader: motifLoader(queryClient),
+    lazy: { Component: () => import('../../features/motifs/routes/motif-page').then((m) => m.MotifPage) },
+  },
+  {
     path: 'originals',
+    loader: originalsLoader(queryClient),
     lazy: {
       Component: () => import('../../features/originals/routes/originals-page').then((m) => m.OriginalsPage),
+    },
+  },
+  {
+    path: 'originals/:originalId',
+    loader: originalLoader(queryClient),
+    lazy: {
+      Component: () => import('../../features/originals/routes/original-page').then((m) => m.OriginalPage),
     },
   },
   {
     path: 'products',
     lazy: {
       Component: () => import('../../features/products/routes/products-page').then((m) => m.ProductsPage),
+    },
+  },
+  {
+    path: 'products/:productId',
+    lazy: {
+      Component: () => import('../../features/products/routes/product-editor-page').then((m) => m.ProductEditorPage),
     },
   },
   {

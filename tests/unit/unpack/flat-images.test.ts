@@ -29,7 +29,7 @@ describe('flat image uploads', () => {
       .png().toFile(file);
     const out = mkdtempSync(join(dir, 'out-'));
     const result = await unpackOriginal({ filePath: file, outDir: out, cut: 'groups', originalName: 'Sea glass sticker.png' });
-    expect(result.document).toMatchObject({ width: 30, height: 20, layerCount: 0 });
+    expect(result.document).toMatchObject({ width: 30, height: 20, layerCount: 0, colourMode: 'RGB', depth: 8 });
     expect(result.motifs).toHaveLength(1);
     expect(result.motifs[0]).toMatchObject({ name: 'Sea glass sticker', kind: 'image', left: 4, top: 6, width: 10, height: 5, suggestedTags: ['sea', 'glass', 'sticker'] });
     const png = await readPngRgba(join(out, result.motifs[0].pngFile));

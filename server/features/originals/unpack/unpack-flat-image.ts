@@ -30,6 +30,9 @@ export async function unpackFlatImage(file: Buffer, ctx: UnpackContext): Promise
   const name = cleanName(ctx.originalName ? nameFromFileName(ctx.originalName) : 'Image', 'Image');
   const report: UnpackResult['report'] = { skipped: [], unsupported: [], notes: [] };
   if ((metadata.pages ?? 1) > 1) report.notes.push(`The image has ${metadata.pages} frames; only the first is imported`);
+  const depth = metadata.depth === 'ushort' ? 16 : 8;
+  if (depth === 16) report.notes.push('The 16-bit image was converted to 8 bits per channel');
+  if (metadata.space === 'cmyk') report.notes.push('The CMYK image was converted to sRGB');
   const crop = trimBox(image);
   const cutMs = performance.now() - started - parseMs;
   progress({ phase: 'encoding', percent: 50 });
@@ -44,11 +47,18 @@ export async function unpackFlatImage(file: Buffer, ctx: UnpackContext): Promise
   }
   progress({ phase: 'finishing', percent: 99 });
   return {
-    document: { width, height, colourMode: metadata.space ?? 'srgb', depth: 8, layerCount: 0, ...(ppi ? { ppi } : {}) },
+    document: { width, height, colourMode: colourModeName(metadata.space), depth, layerCount: 0, ...(ppi ? { ppi } : {}) },
     motifs,
     report,
     timings: { parseMs: Math.round(parseMs), cutMs: Math.round(cutMs), encodeMs: Math.round(performance.now() - started - parseMs - cutMs) },
   };
+}
+
+// in the words the PSD header uses, so both kinds of original read the same
+function colourModeName(space: string | undefined): string {
+  if (space === 'b-w' || space === 'grey16') return 'Grayscale';
+  if (space === 'cmyk') return 'CMYK';
+  return 'RGB';
 }
 
 async function readMetadata(file: Buffer): Promise<Metadata> {

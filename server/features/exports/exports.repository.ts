@@ -1,0 +1,51 @@
+import { and, eq, inArray } from 'drizzle-orm';
+import type { Database } from '../../db/client';
+import { motifs, motifVersions, productExports, type ExportError, type ExportFile, type ExportKind, type ExportStatus } from '../../db/schema/index';
+
+export type ExportRow = typeof productExports.$inferSelect;
+
+/** What the renderer and the manifest need of one motif version, always within one studio. */
+export type MotifVersionRecord = {
+  motifId: string;
+  version: number;
+  name: string;
+  pngKey: string;
+  width: number;
+  height: number;
+  rightsStatus: 'own_work' | 'licensed' | 'public_domain' | 'unknown';
+  rightsSource: string;
+  rightsLicence: string;
+};
+
+export function createExportsRepository(db: Database) {
+  return {
+    async insert(values: { studioId: string; productId: string; productRevision: number; kind: ExportKind; paper: 'a4' | 'letter'; createdBy: string }) {
+      const [row] = await db.insert(productExports).values(values).returning();
+      return row;
+    },
+    async find(studioId: string, id: string) {
+      const [row] = await db.select().from(productExports).where(and(eq(productExports.studioId, studioId), eq(productExports.id, id))).limit(1);
+      return row ?? null;
+    },
+    async findForJob(id: string) {
+      const [row] = await db.select().from(productExports).where(eq(productExports.id, id)).limit(1);
+      return row ?? null;
+    },
+    async update(id: string, patch: { status?: ExportStatus; progress?: number; files?: ExportFile[]; error?: ExportError | null }) {
+      await db.update(productExports).set({ ...patch, updatedAt: new Date() }).where(eq(productExports.id, id));
+    },
+    async motifVersions(studioId: string, motifIds: string[]): Promise<MotifVersionRecord[]> {
+      if (motifIds.length === 0) return [];
+      return db
+        .select({
+          motifId: motifVersions.motifId, version: motifVersions.version, name: motifs.name, pngKey: motifVersions.pngKey,
+          width: motifVersions.width, height: motifVersions.height, rightsStatus: motifs.rightsStatus, rightsSource: motifs.rightsSource, rightsLicence: motifs.rightsLicence,
+        })
+        .from(motifVersions)
+        .innerJoin(motifs, eq(motifs.id, motifVersions.motifId))
+        .where(and(eq(motifVersions.studioId, studioId), eq(motifs.studioId, studioId), inArray(motifVersions.motifId, motifIds)));
+    },
+  };
+}
+
+export type ExportsRepository = ReturnType<typeof createExportsRepository>;

@@ -1,0 +1,122 @@
+import { execFileSync } from 'node:child_process';
+import { mkdtempSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+import { PNG } from 'pngjs';
+import sharp from 'sharp';
+import { describe, expect, it } from 'vitest';
+import { compose, radians, rotate, scale, translate, type Affine } from '../../../shared/geometry';
+import type { BlendMode, MotifDrawOp, RenderPlan } from '../../../shared/scene';
+import { mug11oz } from '../../../shared/templates';
+import { encodePrintFile, pngChunkTypes } from './print-file-encode';
+import { renderPrintFile } from './print-render';
+
+function solid(width: number, height: number, rgba: [number, number, number, number]) {
+  const data = new Uint8Array(width * height * 4);
+  for (let i = 0; i < data.length; i += 4) data.set(rgba, i);
+  return { data, width, height };
+}
+
+function op(motifId: string, matrix: Affine, width: number, height: number, extra: Partial<MotifDrawOp> = {}): MotifDrawOp {
+  return { kind: 'motif', placementId: motifId, role: 'placement', matrix, width, height, opacity: 1, blendMode: 'normal' as BlendMode, clip: null, motifId, version: 1, recolour: { kind: 'none' }, ...extra };
+}
+
+const px = (img: { data: Uint8Array; width: number }, x: number, y: number) => [...img.data.subarray((y * img.width + x) * 4, (y * img.width + x) * 4 + 4)];
+
+describe('print file renderer', () => {
+  it('puts a motif on exactly the template pixels its matrix names', async () => {
+    const plan: RenderPlan = { size: { width: 300, height: 200 }, notes: [], ops: [op('red', translate(100, 50), 10, 10)] };
+    const { image } = await renderPrintFile(plan, { loadMotif: async () => solid(10, 10, [255, 0, 0, 255]) });
+    expect([image.width, image.height]).toEqual([300, 200]);
+    expect(px(image, 100, 50)).toEqual([255, 0, 0, 255]);
+    expect(px(image, 109, 59)).toEqual([255, 0, 0, 255]);
+    expect(px(image, 99, 50)[3]).toBe(0);
+    expect(px(image, 110, 59)[3]).toBe(0);
+    expect(px(image, 100, 60)[3]).toBe(0);
+  });
+
+  it('turns and scales a motif about its matrix like a canvas transform', async () => {
+    // A 2 x 1 motif, left pixel red, right pixel blue, doubled and turned 90° clockwise (y down):
+    // the source's x axis becomes the template's +y axis.
+    const motif = { data: new Uint8Array([255, 0, 0, 255, 0, 0, 255, 255]), width: 2, height: 1 };
+    const m = compose(scale(20), rotate(radians(Math.PI / 2)), translate(50, 10));
+    const { image } = await renderPrintFile({ size: { width: 100, height: 100 }, notes: [], ops: [op('m', m, 2, 1)] }, { loadMotif: async () => motif });
+    // source (0..2, 0..1) x20 -> x: 0..40 down, y: 0..20 leftwards, then moved to (50, 10): x 30..50, y 10..50
+    expect(px(image, 40, 12).slice(0, 3)).toEqual([255, 0, 0]);
+    expect(px(image, 40, 48).slice(0, 3)).toEqual([0, 0, 255]);
+    expect(px(image, 51, 30)[3]).toBe(0);
+    expect(px(image, 29, 30)[3]).toBe(0);
+  });
+
+  it('multiplies and fades layers with the W3C compositing formulas', async () => {
+    const plan: RenderPlan = {
+      size: { width: 4, height: 4 }, notes: [],
+      ops: [op('base', translate(0, 0), 4, 4), op('ink', translate(0, 0), 4, 2, { blendMode: 'multiply' }), op('veil', translate(0, 2), 4, 2, { opacity: 0.5 })],
+    };
+    const colours: Record<string, [number, number, number, number]> = { base: [200, 100, 50, 255], ink: [128, 128, 128, 255], veil: [0, 0, 0, 255] };
+    const { image } = await renderPrintFile(plan, { loadMotif: async (id) => solid(id === 'base' ? 4 : 4, id === 'base' ? 4 : 2, colours[id]) });
+    // W3C Compositing Level 1 §10.1: multiply B = Cb·Cs, so 200·128/255 = 100.4 -> 100, 50.2 -> 50, 25.1 -> 25
+    expect(px(image, 1, 0)).toEqual([100, 50, 25, 255]);
+    // normal at 50 %: Co = 0.5·0 + 0.5·Cb
+    expect(px(image, 1, 3)).toEqual([100, 50, 25, 255]);
+  });
+
+  it('recolours a motif before placing it and clips to the print area', async () => {
+    const plan: RenderPlan = { size: { width: 20, height: 10 }, notes: [], ops: [op('m', translate(0, 0), 20, 10, { recolour: { kind: 'fill', colour: '#2e5e8c' }, clip: { x: 0, y: 0, width: 10, height: 10 } })] };
+    const { image } = await renderPrintFile(plan, { loadMotif: async () => solid(20, 10, [255, 255, 255, 255]) });
+    expect(px(image, 5, 5)).toEqual([0x2e, 0x5e, 0x8c, 255]);
+    expect(px(image, 15, 5)[3]).toBe(0);
+  });
+
+  it('reports text placements it cannot draw rather than dropping them silently', async () => {
+    const plan: RenderPlan = {
+      size: { width: 10, height: 10 }, notes: [],
+      ops: [{ kind: 'text', placementId: 't1', role: 'placement', matrix: translate(0, 0), width: 5, height: 5, opacity: 1, blendMode: 'normal', clip: null, content: 'Hi', fontId: 'source-sans-3', sizePx: 10, colour: '#000000', align: 'left', letterSpacing: 0, arcDeg: 0 }],
+    };
+    const { notes } = await renderPrintFile(plan, { loadMotif: async () => solid(1, 1, [0, 0, 0, 0]) });
+    expect(notes.map((n) => n.code)).toEqual(['render.text_skipped']);
+  });
+});
+
+describe('print file encoding', () => {
+  const image = { ...solid(2550, 1050, [10, 120, 200, 128]), left: 0, top: 0 };
+
+  it('writes a 300 DPI sRGB PNG with transparency kept, read back by pngjs and ImageMagick', async () => {
+    const { buffer, contentType } = await encodePrintFile(image, mug11oz.output);
+    expect(contentType).toBe('image/png');
+    // pngjs (an independent PNG decoder, which also checks every chunk's CRC)
+    const decoded = PNG.sync.read(buffer);
+    expect([decoded.width, decoded.height]).toEqual([2550, 1050]);
+    expect([...decoded.data.subarray(0, 4)]).toEqual([10, 120, 200, 128]);
+    const types = pngChunkTypes(buffer);
+    expect(types.indexOf('sRGB')).toBeGreaterThan(0);
+    expect(types.indexOf('sRGB')).toBeLessThan(types.indexOf('IDAT'));
+    expect(types).not.toContain('iCCP');
+    // W3C PNG spec, pHYs: 300 dpi = 11811 px/m, unit 1 (metre); whole chunk as in reference/png-phys.csv
+    const at = buffer.indexOf(Buffer.from('pHYs', 'latin1')) - 4;
+    expect(buffer.subarray(at, at + 21).toString('hex')).toBe('000000097048597300002e2300002e230178a53f76');
+    // ImageMagick identify: PNG resolution is shown per centimetre (11811 px/m = 118.11 px/cm)
+    const file = path.join(mkdtempSync(path.join(tmpdir(), 'print-')), 'print.png');
+    writeFileSync(file, buffer);
+    const out = execFileSync('/usr/bin/identify', ['-format', '%w %h %x %y %U %[channels]', file], { encoding: 'utf8' });
+    const [w, h, x, y, unit, channels] = out.trim().split(' ');
+    expect([w, h, unit, channels]).toEqual(['2550', '1050', 'PixelsPerCentimeter', 'srgba']);
+    expect(Number(x) * 2.54).toBeCloseTo(300, 2);
+    expect(Number(y)).toBeCloseTo(118.11, 6);
+  });
+
+  it('flattens a JPEG print file on white and sets its density', async () => {
+    const { buffer, contentType } = await encodePrintFile(image, { ...mug11oz.output, format: 'jpeg', transparency: 'flatten' });
+    expect(contentType).toBe('image/jpeg');
+    const meta = await sharp(buffer).metadata();
+    expect([meta.width, meta.height, meta.channels, meta.density]).toEqual([2550, 1050, 3, 300]);
+    const file = path.join(mkdtempSync(path.join(tmpdir(), 'print-')), 'print.jpg');
+    writeFileSync(file, buffer);
+    // ImageMagick identify on the JFIF header
+    expect(execFileSync('/usr/bin/identify', ['-format', '%x %y %U', file], { encoding: 'utf8' })).toBe('300 300 PixelsPerInch');
+    // half-transparent (10,120,200) over white: 255 + (c - 255)·128/255 -> about (132, 188, 228)
+    const { data } = await sharp(buffer).raw().toBuffer({ resolveWithObject: true });
+    expect(Math.abs(data[0] - 132)).toBeLessThanOrEqual(3);
+    expect(Math.abs(data[2] - 228)).toBeLessThanOrEqual(3);
+  });
+});

@@ -1,0 +1,55 @@
+import { Button } from '../../../components/ui/button';
+import type { ProductEditor } from '../editor';
+import { overlayLabels, type OverlayName } from '../overlay-settings';
+import { runCommand } from '../tools/run-command';
+import { SelectTool } from '../tools/select-tool';
+import { zoomStep } from '../viewport';
+import { useEditorState } from './use-editor-state';
+
+type EditorToolbarProps = { editor: ProductEditor; screen: () => { width: number; height: number } };
+
+export function EditorToolbar({ editor, screen }: EditorToolbarProps) {
+  const state = useEditorState(editor);
+  const has = state.selection.length > 0;
+  // The toolbar's commands never cancel a drag, so a throwaway tool is enough for the context.
+  const run = (command: Parameters<typeof runCommand>[1]) => runCommand(editor, command, { tool: new SelectTool(editor), screen: screen() });
+  const zoom = (direction: 'in' | 'out') => {
+    const s = screen();
+    editor.setViewport(zoomStep(editor.viewport, direction, { x: s.width / 2, y: s.height / 2 }));
+  };
+  const overlayNames = Object.keys(overlayLabels) as OverlayName[];
+  return (
+    <div role="toolbar" aria-label="Editing" className="flex flex-wrap items-center gap-1.5">
+      <Button size="sm" variant="secondary" disabled={!state.canUndo} onClick={() => editor.undo()}>Undo</Button>
+      <Button size="sm" variant="secondary" disabled={!state.canRedo} onClick={() => editor.redo()}>Redo</Button>
+      <span className="mx-1 h-6 w-px bg-sand" aria-hidden="true" />
+      <Button size="sm" variant="quiet" disabled={!has} onClick={() => run({ type: 'duplicate' })}>Copy</Button>
+      <Button size="sm" variant="quiet" disabled={!has} onClick={() => run({ type: 'reorder', move: 'forward' })}>Bring forward</Button>
+      <Button size="sm" variant="quiet" disabled={!has} onClick={() => run({ type: 'reorder', move: 'backward' })}>Send back</Button>
+      <Button size="sm" variant="quiet" disabled={!has} onClick={() => run({ type: 'delete' })}>Remove</Button>
+      <span className="mx-1 h-6 w-px bg-sand" aria-hidden="true" />
+      <Button size="sm" variant="quiet" aria-label="Zoom out" onClick={() => zoom('out')}>−</Button>
+      <span className="w-14 text-center text-sm tabular-nums" aria-label="Zoom">{Math.round(state.viewport.zoom * 100)} %</span>
+      <Button size="sm" variant="quiet" aria-label="Zoom in" onClick={() => zoom('in')}>+</Button>
+      <Button size="sm" variant="quiet" onClick={() => editor.fit(screen())}>Whole file</Button>
+      <span className="mx-1 h-6 w-px bg-sand" aria-hidden="true" />
+      <details className="relative">
+        <summary className="cursor-pointer rounded-md px-3 py-1 text-sm font-semibold text-tide-deep hover:bg-sand/60">Guides</summary>
+        <fieldset className="absolute left-0 z-20 mt-1 w-48 space-y-1 rounded-md border border-sand bg-paper p-2 shadow-lg">
+          <legend className="sr-only">Guides to show</legend>
+          {overlayNames.map((name) => (
+            <label key={name} className="flex items-center gap-2 text-sm">
+              <input type="checkbox" checked={state.overlays[name]} onChange={() => editor.toggleOverlay(name)} />
+              {overlayLabels[name]}
+            </label>
+          ))}
+        </fieldset>
+      </details>
+      <Button size="sm" variant="quiet" aria-label={`Rulers in ${state.rulerUnit === 'in' ? 'inches' : 'millimetres'}; switch`}
+        onClick={() => editor.setRulerUnit(state.rulerUnit === 'in' ? 'mm' : 'in')}>
+        {state.rulerUnit === 'in' ? 'Inches' : 'Millimetres'}
+      </Button>
+      <Button size="sm" variant="quiet" onClick={() => editor.setHelpOpen(true)}>Shortcuts</Button>
+    </div>
+  );
+}

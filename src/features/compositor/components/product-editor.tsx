@@ -1,0 +1,99 @@
+import { useCallback, useEffect, useRef, useState } from 'react';
+import type { Vec } from '@shared/geometry';
+import { addPlacement, type Layout } from '@shared/scene';
+import type { ProductDetail } from '@shared/contracts/products';
+import { isApiRequestError } from '../../../lib/api-client';
+import { Autosaver } from '../autosave';
+import { ProductEditor } from '../editor';
+import { frontCentre, placementForMotif, placementsAsInOriginal, type OriginalMotif, type PlaceableMotif } from '../place-motifs';
+import type { LoadThumb } from '../render/image-cache';
+import { EditorCanvas } from './editor-canvas';
+import { EditorToolbar } from './editor-toolbar';
+import { HelpSheet } from './help-sheet';
+import { Inspector } from './inspector';
+import { MotifTray } from './motif-tray';
+import { SaveStatusBar } from './save-status';
+
+export type ProductEditorProps = {
+  product: ProductDetail;
+  save: (layout: Layout, revision: number) => Promise<{ revision: number }>;
+  /** Fetches the product again after a conflict. */
+  reload: () => Promise<ProductDetail>;
+  loadThumb?: LoadThumb;
+};
+
+const toFailure = (error: unknown) =>
+  isApiRequestError(error) ? { code: error.code, message: error.message } : { code: 'save.failed', message: 'The product could not be saved; check your connection.' };
+
+/** The editor page's body: tray, canvas and inspector around one ProductEditor with autosave. */
+export function ProductEditorView({ product, save, reload, loadThumb }: ProductEditorProps) {
+  const [editor] = useState(() => new ProductEditor(product.template, product.layout));
+  const [autosaver] = useState(() => new Autosaver(product.layout, product.revision, save, toFailure));
+  const [reloading, setReloading] = useState(false);
+  const canvasBox = useRef<HTMLDivElement>(null);
+
+  useEffect(() => {
+    let last = editor.getState().committedLayout;
+    const off = editor.subscribe(() => {
+      const next = editor.getState().committedLayout;
+      if (next !== last) {
+        last = next;
+        autosaver.changed(next);
+      }
+    });
+    const beforeUnload = (e: BeforeUnloadEvent) => {
+      if (!autosaver.hasUnsavedChanges) return;
+      void autosaver.flush();
+      e.preventDefault();
+    };
+    window.addEventListener('beforeunload', beforeUnload);
+    return () => {
+      off();
+      window.removeEventListener('beforeunload', beforeUnload);
+      void autosaver.flush();
+      autosaver.dispose();
+    };
+  }, [editor, autosaver]);
+
+  const screen = useCallback(() => {
+    const r = canvasBox.current?.getBoundingClientRect();
+    return { width: r?.width ?? 800, height: r?.height ?? 500 };
+  }, []);
+
+  const place = useCallback((motif: PlaceableMotif, at?: Vec) => {
+    const p = placementForMotif(motif, at ?? frontCentre(editor.geometry), editor.geometry);
+    editor.change((l) => addPlacement(l, p), [p.id]);
+  }, [editor]);
+
+  const placeOriginal = useCallback((motifs: OriginalMotif[]) => {
+    const ps = placementsAsInOriginal(motifs, editor.geometry);
+    if (ps.length === 0) return;
+    editor.change((l) => ps.reduce((acc, p) => addPlacement(acc, p), l), ps.map((p) => p.id));
+  }, [editor]);
+
+  const onReload = async () => {
+    setReloading(true);
+    try {
+      const fresh = await reload();
+      editor.replaceLayout(fresh.layout);
+      autosaver.reset(fresh.layout, fresh.revision);
+    } finally {
+      setReloading(false);
+    }
+  };
+
+  return (
+    <div className="grid h-[calc(100vh-8rem)] min-h-[520px] grid-cols-[15rem_minmax(0,1fr)_17rem] grid-rows-[auto_minmax(0,1fr)] overflow-hidden rounded-lg border border-sand">
+      <div className="col-span-3 flex flex-wrap items-center justify-between gap-2 border-b border-sand bg-paper px-3 py-2">
+        <EditorToolbar editor={editor} screen={screen} />
+        <SaveStatusBar autosaver={autosaver} onReload={onReload} reloading={reloading} />
+      </div>
+      <MotifTray onPlace={(m) => place(m)} onPlaceOriginal={placeOriginal} />
+      <div ref={canvasBox} className="min-h-0">
+        <EditorCanvas editor={editor} onDropMotif={place} loadThumb={loadThumb} />
+      </div>
+      <Inspector editor={editor} />
+      <HelpSheet editor={editor} />
+    </div>
+  );
+}
