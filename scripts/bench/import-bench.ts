@@ -21,7 +21,7 @@ export type UnpackBenchRow = {
   layerMegapixels: number;
   imageMagickMs: number | null;
   floorMs: number;
-  ours: { cut: UnpackCut; warm: boolean; ms: number; childPeakRssMb: number; motifs: number; parseMs: number; cutMs: number; encodeMs: number }[];
+  ours: { cut: UnpackCut; warm: boolean; ms: number; childCpuMs: number; childPeakRssMb: number; motifs: number; parseMs: number; cutMs: number; encodeMs: number }[];
 };
 
 export async function benchUnpack(options: { log?: (line: string) => void } = {}): Promise<UnpackBenchRow[]> {
@@ -97,7 +97,7 @@ async function timeOurs(psd: BenchPsd, cut: UnpackCut, warm: boolean): Promise<U
     const result = await runUnpack({ filePath: psd.file, outDir: dir, cut });
     const ms = Math.round(performance.now() - started);
     return {
-      cut, warm, ms, motifs: result.motifs.length,
+      cut, warm, ms, motifs: result.motifs.length, childCpuMs: result.resources?.cpuMs ?? 0,
       childPeakRssMb: Math.round((result.resources?.peakRssBytes ?? 0) / 1048576),
       parseMs: Math.round(result.timings.parseMs), cutMs: Math.round(result.timings.cutMs), encodeMs: Math.round(result.timings.encodeMs),
     };
@@ -114,7 +114,7 @@ function printRow(row: UnpackBenchRow, log: (line: string) => void): void {
   for (const o of row.ours) {
     const vsIm = im ? ` = ${(o.ms / im).toFixed(2)}x ImageMagick` : '';
     log(`  runUnpack cut=${o.cut} ${o.warm ? 'pre-started child' : 'cold child'}: ${o.ms} ms${vsIm}, ${(o.ms / row.floorMs).toFixed(2)}x floor,`
-      + ` child peak RSS ${o.childPeakRssMb} MB, ${o.motifs} motifs (parse ${o.parseMs}, cut ${o.cutMs}, encode ${o.encodeMs} ms)`);
+      + ` child peak RSS ${o.childPeakRssMb} MB, child CPU ${o.childCpuMs} ms, ${o.motifs} motifs (parse ${o.parseMs}, cut ${o.cutMs}, encode ${o.encodeMs} ms)`);
   }
 }
 

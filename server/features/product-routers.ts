@@ -1,5 +1,8 @@
 import type { Router } from 'express';
 import type { Runtime } from '../runtime';
+import { createExportsRepository } from './exports/exports.repository';
+import { exportsRouter, productExportsRouter } from './exports/exports.router';
+import { createExportsService } from './exports/exports.service';
 import { createProductsRepository } from './products/products.repository';
 import { productsRouter } from './products/products.router';
 import { createProductsService } from './products/products.service';
@@ -7,9 +10,10 @@ import { createTemplatesRepository } from './templates/templates.repository';
 import { templatesRouter } from './templates/templates.router';
 import { createTemplatesService } from './templates/templates.service';
 
-// Templates and products: the compositor's server side.
-export function productRouters(runtime: Pick<Runtime, 'db'>): Router[] {
+// Templates, products and their exports: the compositor's and the print output's server side.
+export function productRouters(runtime: Pick<Runtime, 'db' | 'storage' | 'queue'>): Router[] {
   const templates = createTemplatesService(createTemplatesRepository(runtime.db.db));
   const products = createProductsService(createProductsRepository(runtime.db.db), templates);
-  return [templatesRouter(templates), productsRouter(products)];
+  const exports = createExportsService({ repo: createExportsRepository(runtime.db.db), products, storage: runtime.storage, queue: runtime.queue });
+  return [templatesRouter(templates), productsRouter(products), productExportsRouter(exports), exportsRouter(exports)];
 }

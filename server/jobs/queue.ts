@@ -1,11 +1,13 @@
 import PgBoss from 'pg-boss';
 
-export const queueNames = { importOriginal: 'import-original' } as const;
+export const queueNames = { importOriginal: 'import-original', exportProduct: 'export-product' } as const;
 
 export type ImportJobData = { originalId: string };
+export type ExportJobData = { exportId: string };
 
 export type JobQueue = {
   enqueueImport(originalId: string): Promise<void>;
+  enqueueExport(exportId: string): Promise<void>;
   boss: PgBoss;
   stop(): Promise<void>;
 };
@@ -23,8 +25,18 @@ export async function startQueue(databaseUrl: string): Promise<JobQueue> {
     retryBackoff: true,
     expireInSeconds: 15 * 60,
   });
+  await boss.createQueue(queueNames.exportProduct, {
+    name: queueNames.exportProduct,
+    // An export renders again from the product and its motifs, so a retry is always safe.
+    retryLimit: 2,
+    retryDelay: 5,
+    expireInSeconds: 15 * 60,
+  });
   return {
     boss,
+    async enqueueExport(exportId) {
+      await boss.send(queueNames.exportProduct, { exportId } satisfies ExportJobData, { singletonKey: exportId });
+    },
     async enqueueImport(originalId) {
       await boss.send(queueNames.importOriginal, { originalId } satisfies ImportJobData, { singletonKey: originalId });
     },

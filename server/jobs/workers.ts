@@ -3,10 +3,13 @@ import { createOriginalImporter } from '../features/originals/import-original';
 import { createOriginalsRepository } from '../features/originals/originals.repository';
 import { runUnpack } from '../features/originals/unpack/run-unpack';
 import type { Runtime } from '../runtime';
+import { startExportWorkers } from './export-workers';
 import { queueNames, type ImportJobData } from './queue';
 
-// Runs import jobs: in the web process in development, in `npm run worker` processes in production.
+// Runs import jobs (and, through startExportWorkers, export jobs): in the web process in
+// development, in `npm run worker` processes in production.
 export async function startImportWorkers(runtime: Runtime): Promise<() => Promise<void>> {
+  const stopExports = await startExportWorkers(runtime);
   const repo = createOriginalsRepository(runtime.db.db);
   const importOriginal = createOriginalImporter({ db: runtime.db.db, repo, storage: runtime.storage, runUnpack });
   const ids: string[] = [];
@@ -33,6 +36,7 @@ export async function startImportWorkers(runtime: Runtime): Promise<() => Promis
     ids.push(id);
   }
   return async () => {
+    await stopExports();
     for (const id of ids) await runtime.queue.boss.offWork({ id } as PgBoss.OffWorkOptions).catch(() => {});
   };
 }

@@ -106,6 +106,8 @@ describe('importing a layered PSD as the demo editor', () => {
 
     await done.getByRole('link', { name: 'See its motifs and import report' }).click();
     await page.waitForURL((url) => url.pathname.startsWith('/originals/'));
+    await page.getByRole('heading', { level: 1, name: fileName }).waitFor();
+    await page.getByRole('heading', { name: 'Motifs' }).waitFor();
     for (const motif of card.motifs) {
       await page.getByText(motif.name, { exact: true }).first().waitFor();
     }

@@ -1,8 +1,15 @@
 import { rightsStatuses, type ColourMatch, type MotifFacets, type MotifFilter, type MotifListQuery } from '../../../shared/contracts/motifs';
+import type { ColourMatchResult } from '../../../shared/library/colour-match';
 import type { LibraryRecord } from './library-records';
 import type { StudioLibrary } from './studio-library';
 
-export type MotifHit = { record: LibraryRecord; score: number | null; colourMatch: ColourMatch | null; colourRank: number | null };
+// Kept small: a query over 10,000 motifs makes one per match.
+export type MotifHit = { record: LibraryRecord; score: number | null; colour: ColourMatchResult | null };
+
+export function colourMatchOf(hit: MotifHit): ColourMatch | null {
+  const c = hit.colour;
+  return c ? { hex: c.hex, share: c.share, deltaE: Math.round(c.deltaE * 100) / 100 } : null;
+}
 
 const FACET_LIMIT = 100;
 
@@ -35,29 +42,26 @@ export function matchMotifs(
     if (textScores) {
       const found = textScores.get(r.motif.id);
       if (found === undefined) continue;
-      score = Math.round(found * 1000) / 1000;
+      score = found;
     }
     if (!passesFilters(r, f)) continue;
-    let colourMatch: ColourMatch | null = null;
-    let colourRank: number | null = null;
+    let colour: ColourMatchResult | null = null;
     if (colours) {
-      const match = colours.get(r.motif.id);
-      if (!match) continue;
-      colourMatch = { hex: match.hex, share: match.share, deltaE: Math.round(match.deltaE * 100) / 100 };
-      colourRank = match.rank;
+      colour = colours.get(r.motif.id) ?? null;
+      if (!colour) continue;
     }
     if (r.motif.archived) {
       archivedMatching++;
       if (f.archived === 'exclude') continue;
     } else if (f.archived === 'only') continue;
-    hits.push({ record: r, score, colourMatch, colourRank });
+    hits.push({ record: r, score, colour });
   }
   return { hits, archivedMatching };
 }
 
 // "best": with words and a colour, relevance scaled by colour closeness; otherwise whichever was asked.
 function bestValue(hit: MotifHit, maxDistance: number): number {
-  const colourCloseness = hit.colourRank === null ? 1 : 1 - hit.colourRank / (2 * Math.max(maxDistance, 1e-6));
+  const colourCloseness = hit.colour === null ? 1 : 1 - hit.colour.rank / (2 * Math.max(maxDistance, 1e-6));
   return (hit.score ?? 1) * colourCloseness;
 }
 

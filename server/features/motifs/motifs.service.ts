@@ -21,21 +21,26 @@ import { toMotifSummary } from '../originals/motif-dto';
 import { createOriginalsCleanup } from '../originals/originals-cleanup';
 import { runBulkAction } from './bulk-edit';
 import type { LibraryCache } from './library-cache';
-import { matchMotifs, queryLibrary, type MotifHit } from './library-query';
+import { colourMatchOf, matchMotifs, queryLibrary, type MotifHit } from './library-query';
 import type { LibraryRecord } from './library-records';
 import { motifUsage } from './motif-usage';
 import type { MotifsRepository } from './motifs.repository';
 
 type Deps = { db: Database; repo: MotifsRepository; cache: LibraryCache; storage: ObjectStorage };
 
-export function toLibraryMotif(r: LibraryRecord, hit?: Pick<MotifHit, 'score' | 'colourMatch'>): LibraryMotif {
+// Records are replaced whenever their motif changes, so the summary can be kept on them.
+const summaries = new WeakMap<LibraryRecord, Omit<LibraryMotif, 'score' | 'colourMatch'>>();
+
+export function toLibraryMotif(r: LibraryRecord, hit?: MotifHit): LibraryMotif {
+  let summary = summaries.get(r);
+  if (!summary) {
+    summary = { ...toMotifSummary(r.motif, r.version), originalName: r.originalName, collectionIds: r.collectionIds, usageCount: r.usageCount };
+    summaries.set(r, summary);
+  }
   return {
-    ...toMotifSummary(r.motif, r.version),
-    originalName: r.originalName,
-    collectionIds: r.collectionIds,
-    usageCount: r.usageCount,
-    score: hit?.score ?? null,
-    colourMatch: hit?.colourMatch ?? null,
+    ...summary,
+    score: hit?.score == null ? null : Math.round(hit.score * 1000) / 1000,
+    colourMatch: hit ? colourMatchOf(hit) : null,
   };
 }
 

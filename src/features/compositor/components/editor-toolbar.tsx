@@ -4,6 +4,9 @@ import { overlayLabels, type OverlayName } from '../overlay-settings';
 import { runCommand } from '../tools/run-command';
 import { SelectTool } from '../tools/select-tool';
 import { zoomStep } from '../viewport';
+import { addPlacement } from '@shared/scene';
+import { frontCentre } from '../place-motifs';
+import { newTextPlacement } from '../text-measure';
 import { useEditorState } from './use-editor-state';
 
 type EditorToolbarProps = { editor: ProductEditor; screen: () => { width: number; height: number } };
@@ -17,12 +20,18 @@ export function EditorToolbar({ editor, screen }: EditorToolbarProps) {
     const s = screen();
     editor.setViewport(zoomStep(editor.viewport, direction, { x: s.width / 2, y: s.height / 2 }));
   };
+  const addText = () => {
+    const t = newTextPlacement(frontCentre(editor.geometry), editor.template.dpi);
+    editor.change((l) => addPlacement(l, t), [t.id]);
+  };
+  const isWrap = editor.geometry.wrap !== null;
   const overlayNames = Object.keys(overlayLabels) as OverlayName[];
   return (
     <div role="toolbar" aria-label="Editing" className="flex flex-wrap items-center gap-1.5">
       <Button size="sm" variant="secondary" disabled={!state.canUndo} onClick={() => editor.undo()}>Undo</Button>
       <Button size="sm" variant="secondary" disabled={!state.canRedo} onClick={() => editor.redo()}>Redo</Button>
       <span className="mx-1 h-6 w-px bg-sand" aria-hidden="true" />
+      <Button size="sm" variant="quiet" onClick={addText}>Add text</Button>
       <Button size="sm" variant="quiet" disabled={!has} onClick={() => run({ type: 'duplicate' })}>Copy</Button>
       <Button size="sm" variant="quiet" disabled={!has} onClick={() => run({ type: 'reorder', move: 'forward' })}>Bring forward</Button>
       <Button size="sm" variant="quiet" disabled={!has} onClick={() => run({ type: 'reorder', move: 'backward' })}>Send back</Button>
@@ -49,6 +58,12 @@ export function EditorToolbar({ editor, screen }: EditorToolbarProps) {
         onClick={() => editor.setRulerUnit(state.rulerUnit === 'in' ? 'mm' : 'in')}>
         {state.rulerUnit === 'in' ? 'Inches' : 'Millimetres'}
       </Button>
+      {isWrap && (
+        <label className="flex items-center gap-1.5 px-2 text-sm" title="Copies the layout to the other side of the mug, so left- and right-handed drinkers both see it">
+          <input type="checkbox" checked={state.scene.layout.mirror} onChange={(e) => editor.change((l) => ({ ...l, mirror: e.target.checked }))} />
+          Both sides
+        </label>
+      )}
       <Button size="sm" variant="quiet" onClick={() => editor.setHelpOpen(true)}>Shortcuts</Button>
     </div>
   );

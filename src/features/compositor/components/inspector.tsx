@@ -11,6 +11,8 @@ import { placedSizePx, ppiLevel, pxToUnit } from '../placement-measures';
 import { blendModeLabels } from '../render/blend-modes';
 import { NumberField } from './number-field';
 import { RecolourFields } from './recolour-fields';
+import { RepeatFields } from './repeat-fields';
+import { TextFields } from './text-fields';
 import { useEditorState } from './use-editor-state';
 
 export function Inspector({ editor }: { editor: ProductEditor }) {
@@ -58,11 +60,11 @@ function SinglePlacement({ editor, p, unit }: { editor: ProductEditor; p: Placem
       <Section title="Position (centre)">
         <NumberField label="Across" value={p.x} unit="px" disabled={disabled} onCommit={(x) => edit((q) => ({ ...q, x }))} />
         <NumberField label="Down" value={p.y} unit="px" disabled={disabled} onCommit={(y) => edit((q) => ({ ...q, y }))} />
-        <p className="text-xs text-ink-soft">{u(p.x).toFixed(2)} × {u(p.y).toFixed(2)} {unit} from the file’s corner</p>
+        <p className="text-xs text-ink-soft">{`${u(p.x).toFixed(2)} × ${u(p.y).toFixed(2)} ${unit} from the file’s corner`}</p>
       </Section>
       <Section title="Size">
         <NumberField label="Width" value={size.width} unit="px" disabled={disabled || p.type === 'text'} onCommit={setWidth} />
-        <p className="text-xs text-ink-soft">{size.width.toFixed(0)} × {size.height.toFixed(0)} px · {u(size.width).toFixed(2)} × {u(size.height).toFixed(2)} {unit}</p>
+        <p className="text-xs text-ink-soft">{`${size.width.toFixed(0)} × ${size.height.toFixed(0)} px · ${u(size.width).toFixed(2)} × ${u(size.height).toFixed(2)} ${unit}`}</p>
         {p.type !== 'text' && (
           <NumberField label="Scale" value={p.scale * 100} unit="%" disabled={disabled} onCommit={(s) => s > 0 && edit((q) => (q.type === 'text' ? q : { ...q, scale: s / 100 }))} />
         )}
@@ -91,6 +93,8 @@ function SinglePlacement({ editor, p, unit }: { editor: ProductEditor; p: Placem
           options={blendModeSchema.options.map((m) => ({ value: m, label: blendModeLabels[m] }))}
           onChange={(e) => edit((q) => ({ ...q, blendMode: blendModeSchema.parse(e.target.value) }))} />
       </Section>
+      {p.type === 'text' && <TextFields editor={editor} p={p} />}
+      <RepeatFields editor={editor} p={p} />
       {p.type !== 'text' && (
         <div className="mb-4">
           <RecolourFields value={p.recolour as Recolour} onDone={done}

@@ -82,8 +82,9 @@ export function ProductEditorView({ product, save, reload, loadThumb }: ProductE
     }
   };
 
+  // Wider than the page column: a long mug strip needs the whole window.
   return (
-    <div className="grid h-[calc(100vh-8rem)] min-h-[520px] grid-cols-[15rem_minmax(0,1fr)_17rem] grid-rows-[auto_minmax(0,1fr)] overflow-hidden rounded-lg border border-sand">
+    <div className="relative left-1/2 grid h-[calc(100vh-10.5rem)] min-h-[520px] w-[calc(100vw-2rem)] -translate-x-1/2 grid-cols-[14rem_minmax(0,1fr)_17rem] grid-rows-[auto_minmax(0,1fr)] overflow-hidden rounded-lg border border-sand bg-paper">
       <div className="col-span-3 flex flex-wrap items-center justify-between gap-2 border-b border-sand bg-paper px-3 py-2">
         <EditorToolbar editor={editor} screen={screen} />
         <SaveStatusBar autosaver={autosaver} onReload={onReload} reloading={reloading} />

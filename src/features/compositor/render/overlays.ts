@@ -39,7 +39,12 @@ export function drawTemplateOverlays(ctx: Ctx2D, g: TemplateGeometry, o: Overlay
       ctx.fillStyle = overlayColours.keepOut;
       fill(ctx, k.rect);
       hatch(ctx, k.rect, 14 * px, overlayColours.keepOutLine, px);
-      label(ctx, k.label, k.rect.x + 6 * px, k.rect.y + 16 * px, px, overlayColours.keepOutLine);
+      // Along the strip: a handle zone is far narrower than its label.
+      ctx.save();
+      ctx.translate(k.rect.x + k.rect.width / 2 - 4 * px, k.rect.y + 8 * px);
+      ctx.rotate(Math.PI / 2);
+      label(ctx, k.label, 0, 0, px, overlayColours.keepOutLine);
+      ctx.restore();
     }
   }
   if (o.printArea && !sameRect(g.printArea, g.bleedRect)) stroke(ctx, g.printArea, overlayColours.printArea, []);

@@ -19,7 +19,7 @@ export function rulerTicks(originScreen: number, screenPerUnit: number, lengthPx
   if (!(screenPerUnit > 0)) return [];
   const steps = STEPS[unit];
   const major = steps.find((s) => s * screenPerUnit >= MIN_LABEL_GAP_PX) ?? steps[steps.length - 1];
-  const minor = [...steps].reverse().find((s) => s < major && s * screenPerUnit >= MIN_TICK_GAP_PX && isDivisor(s, major)) ?? major;
+  const minor = steps.find((s) => s < major && s * screenPerUnit >= MIN_TICK_GAP_PX && isDivisor(s, major)) ?? major;
   const first = Math.floor((0 - originScreen) / (minor * screenPerUnit));
   const last = Math.ceil((lengthPx - originScreen) / (minor * screenPerUnit));
   const ticks: RulerTick[] = [];

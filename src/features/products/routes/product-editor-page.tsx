@@ -33,7 +33,7 @@ export function ProductEditorPage() {
   const p = product.data;
   return (
     <div>
-      <PageHeader title={p.name} description={`${p.templateName} · ${p.stage}`} />
+      <PageHeader title={p.name} actions={<span className="text-sm text-ink-soft">{`${p.templateName} · ${p.stage}`}</span>} />
       {/* keyed by id, so moving to another product starts a fresh editor and autosave */}
       <ProductEditorView key={p.id} product={p} save={save} reload={reload} />
     </div>

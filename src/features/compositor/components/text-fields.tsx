@@ -1,0 +1,38 @@
+import { useEffect, useState } from 'react';
+import { mapPlacements, type TextPlacement } from '@shared/scene';
+import { Select } from '../../../components/ui/select-field';
+import type { ProductEditor } from '../editor';
+import { remeasured, SHIPPED_FONTS } from '../text-measure';
+import { NumberField } from './number-field';
+
+const aligns = [{ value: 'left', label: 'Left' }, { value: 'centre', label: 'Centre' }, { value: 'right', label: 'Right' }] as const;
+
+export function TextFields({ editor, p }: { editor: ProductEditor; p: TextPlacement }) {
+  const dpi = editor.template.dpi;
+  const [content, setContent] = useState(p.content);
+  useEffect(() => setContent(p.content), [p.content]);
+  const edit = (patch: Partial<TextPlacement>) =>
+    editor.change((l) => mapPlacements(l, [p.id], (q) => (q.type === 'text' ? remeasured({ ...q, ...patch }, dpi) : q)));
+  return (
+    <section className="mb-4 space-y-1.5">
+      <h3 className="text-xs font-semibold uppercase tracking-wide text-ink-soft">Words</h3>
+      <label className="block text-xs text-ink-soft">
+        Text
+        <textarea value={content} rows={2} maxLength={2000} onChange={(e) => setContent(e.target.value)}
+          onBlur={() => content !== p.content && edit({ content })}
+          className="mt-0.5 block w-full rounded border border-sand bg-white px-1.5 py-1 text-sm text-ink" />
+      </label>
+      <Select aria-label="Font" value={p.fontId} className="border-sand text-sm" options={SHIPPED_FONTS.map((f) => ({ value: f.id, label: f.name }))}
+        onChange={(e) => edit({ fontId: e.target.value })} />
+      <NumberField label="Size" value={p.sizePt} unit="pt" onCommit={(sizePt) => sizePt > 0 && sizePt <= 2000 && edit({ sizePt })} />
+      <NumberField label="Spacing" value={p.letterSpacing} unit="‰" digits={0} onCommit={(letterSpacing) => letterSpacing >= -500 && letterSpacing <= 2000 && edit({ letterSpacing })} />
+      <div className="flex items-center gap-2">
+        <label className="flex items-center gap-2 text-xs text-ink-soft">
+          Colour <input type="color" value={p.colour} onChange={(e) => edit({ colour: e.target.value })} />
+        </label>
+        <Select aria-label="Alignment" value={p.align} options={aligns} className="border-sand text-sm"
+          onChange={(e) => edit({ align: e.target.value as TextPlacement['align'] })} />
+      </div>
+    </section>
+  );
+}
