@@ -3,6 +3,7 @@ import { createScene, renderPlan, type RenderPlan, type Scene } from '../../../s
 import type { Template } from '../../../shared/templates';
 import { decodeMotifPng, renderPrintFile, type LoadMotifPixels, type PrintRender } from '../../lib/image/print-render';
 import type { SourcePixels } from '../../lib/image/affine-sample';
+import { drawTextLayer } from '../../lib/image/text-layer';
 import type { ObjectStorage } from '../../lib/storage';
 import type { ProductsService, ProductView } from '../products/products.service';
 import type { ExportsRepository, MotifVersionRecord } from './exports.repository';
@@ -66,5 +67,5 @@ export async function renderProduct(sources: ProductSources, options: { maxSide?
   const plan = renderPlan(sources.scene, sources.template);
   const longest = Math.max(plan.size.width, plan.size.height);
   const k = options.maxSide && longest > options.maxSide ? options.maxSide / longest : 1;
-  return renderPrintFile(k === 1 ? plan : scaledPlan(plan, k), { loadMotif: sources.loadMotif, onProgress: options.onProgress });
+  return renderPrintFile(k === 1 ? plan : scaledPlan(plan, k), { loadMotif: sources.loadMotif, drawText: drawTextLayer, onProgress: options.onProgress });
 }

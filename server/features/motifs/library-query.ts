@@ -114,13 +114,15 @@ export function facetsOf(library: StudioLibrary, hits: readonly MotifHit[], arch
 }
 
 export function queryLibrary(library: StudioLibrary, query: MotifListQuery) {
-  const textScores = query.q ? library.text.search(query.q) : null;
-  const ranked = query.sort === 'best' && (Boolean(query.colour) || textScores !== null);
-  const order = library.inOrder(query.sort === 'name' || query.sort === 'most_used' ? 'name' : 'newest');
-  const { hits, archivedMatching } = matchMotifs(library, query, order, textScores);
-  const facets = facetsOf(library, hits, archivedMatching);
-  const sorted = rank(hits, query, ranked);
-  const page = sorted.slice(query.offset, query.offset + query.limit);
-  const end = query.offset + page.length;
-  return { page, total: hits.length, nextOffset: end < hits.length ? end : null, facets };
+  const { offset, limit, ...question } = query;
+  const { sorted, facets } = library.remember(JSON.stringify(question), () => {
+    const textScores = query.q ? library.text.search(query.q) : null;
+    const ranked = query.sort === 'best' && (Boolean(query.colour) || textScores !== null);
+    const order = library.inOrder(query.sort === 'name' || query.sort === 'most_used' ? 'name' : 'newest');
+    const { hits, archivedMatching } = matchMotifs(library, query, order, textScores);
+    return { facets: facetsOf(library, hits, archivedMatching), sorted: rank(hits, query, ranked) };
+  });
+  const page = sorted.slice(offset, offset + limit);
+  const end = offset + page.length;
+  return { page, total: sorted.length, nextOffset: end < sorted.length ? end : null, facets };
 }

@@ -14,6 +14,7 @@ export class StudioLibrary {
   // Derived views, dropped whenever a motif changes.
   private orders: Partial<Record<'newest' | 'name', LibraryRecord[]>> = {};
   private colourResults = new Map<string, Map<string, ColourMatchResult>>();
+  private answers = new Map<string, unknown>();
 
   constructor(
     readonly studioId: string,
@@ -38,6 +39,17 @@ export class StudioLibrary {
   private changed() {
     this.orders = {};
     this.colourResults.clear();
+    this.answers.clear();
+  }
+
+  // The last few answers to whole queries, until the next change: scrolling a grid asks the same
+  // query again for every page.
+  remember<T>(key: string, compute: () => T): T {
+    if (this.answers.has(key)) return this.answers.get(key) as T;
+    const value = compute();
+    if (this.answers.size >= 16) this.answers.delete(this.answers.keys().next().value!);
+    this.answers.set(key, value);
+    return value;
   }
 
   upsert(record: LibraryRecord) {

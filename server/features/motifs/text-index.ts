@@ -10,7 +10,8 @@ const bit = Object.fromEntries(fields.map((f, i) => [f, 1 << i])) as Record<Fiel
 // A word found in a name or tag says more about a motif than the same word in its notes.
 export const FIELD_WEIGHTS: Record<Field, number> = { name: 1, tags: 1, originalName: 0.55, sourcePath: 0.45, notes: 0.3 };
 
-const weightOf = (mask: number) => fields.reduce((best, f) => (mask & bit[f] && FIELD_WEIGHTS[f] > best ? FIELD_WEIGHTS[f] : best), 0);
+// The best field weight of every combination of fields a word can come from.
+const weightOfMask = Array.from({ length: 1 << fields.length }, (_, mask) => fields.reduce((best, f) => (mask & bit[f] && FIELD_WEIGHTS[f] > best ? FIELD_WEIGHTS[f] : best), 0));
 
 // Fuse scores a match by its errors per letter (a swap of two letters is two errors): two
 // errors from six letters on ("lantren" → "lantern" scores 0.29), one from four, none in a
@@ -45,7 +46,8 @@ export class TextIndex {
     };
     addWords('name', values.name);
     for (const tag of values.tags) addWords('tags', tag);
-    addWords('originalName', values.originalName);
+    // "fox-walk.psd": the file type is in every original's name and says nothing.
+    addWords('originalName', values.originalName.replace(/\.[a-z0-9]{2,4}$/i, ''));
     addWords('sourcePath', values.sourcePath);
     addWords('notes', values.notes);
     this.termsOf.set(motifId, terms);
@@ -97,7 +99,7 @@ export class TextIndex {
       for (const [term, closeness] of this.matchingTerms(word)) {
         for (const [motifId, mask] of this.postings.get(term)!) {
           if (total && !total.has(motifId)) continue;
-          const score = closeness * weightOf(mask);
+          const score = closeness * weightOfMask[mask];
           if (score > (best.get(motifId) ?? 0)) best.set(motifId, score);
         }
       }

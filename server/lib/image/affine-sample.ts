@@ -37,37 +37,91 @@ export function drawTransformed(source: SourcePixels, matrix: Affine, clip: Rect
   for (let y = 0; y < height; y++) {
     const ty = box.top + y + 0.5;
     // Source coordinates of the row's first centre, moved by (ia, ib) per output pixel.
-    let u = ia * (box.left + 0.5) + ic * ty + ie - 0.5;
-    let v = ib * (box.left + 0.5) + id * ty + iff - 0.5;
-    let o = y * width * 4;
-    for (let x = 0; x < width; x++, u += ia, v += ib, o += 4) {
-      if (u <= -1 || v <= -1 || u >= sw || v >= sh) continue;
-      const x0 = Math.floor(u);
-      const y0 = Math.floor(v);
-      const fx = u - x0;
-      const fy = v - y0;
-      let r = 0, g = 0, bl = 0, al = 0;
-      for (let k = 0; k < 4; k++) {
-        const sx = x0 + (k & 1);
-        const sy = y0 + (k >> 1);
-        if (sx < 0 || sy < 0 || sx >= sw || sy >= sh) continue;
-        const w = ((k & 1) ? fx : 1 - fx) * ((k >> 1) ? fy : 1 - fy);
-        const i = (sy * sw + sx) * 4;
-        const wa = w * src[i + 3];
-        if (wa === 0) continue;
-        r += wa * src[i];
-        g += wa * src[i + 1];
-        bl += wa * src[i + 2];
-        al += wa;
+    const u0 = ia * (box.left + 0.5) + ic * ty + ie - 0.5;
+    const v0 = ib * (box.left + 0.5) + id * ty + iff - 0.5;
+    const row = y * width * 4;
+    // Columns whose sample touches the source at all, and those whose four taps all lie inside it.
+    const [t0, t1] = span(u0, ia, -1, sw, span(v0, ib, -1, sh, [0, width]));
+    const [f0, f1] = span(u0, ia, 0, sw - 1, span(v0, ib, 0, sh - 1, [t0, t1]));
+    for (let x = t0; x < t1; x++) {
+      if (x === f0 && f1 > f0) {
+        interiorRun(src, sw, out, row, u0, v0, ia, ib, f0, f1);
+        x = f1 - 1;
+        continue;
       }
-      if (al <= 0) continue;
-      out[o] = (r / al + 0.5) | 0;
-      out[o + 1] = (g / al + 0.5) | 0;
-      out[o + 2] = (bl / al + 0.5) | 0;
-      out[o + 3] = (al + 0.5) | 0;
+      edgePixel(src, sw, sh, out, row + x * 4, u0 + ia * x, v0 + ib * x);
     }
   }
   return { data: out, width, height, left: box.left, top: box.top };
+}
+
+/** The x range [from, to) within `within` where lo < c0 + k·x < hi (strictly inside, as the samplers need). */
+function span(c0: number, k: number, lo: number, hi: number, within: [number, number]): [number, number] {
+  let [a, b] = within;
+  if (k === 0) return c0 > lo && c0 < hi ? [a, b] : [a, a];
+  const x1 = (lo - c0) / k;
+  const x2 = (hi - c0) / k;
+  const from = Math.min(x1, x2);
+  const to = Math.max(x1, x2);
+  // integer x with from < x < to
+  a = Math.max(a, Math.floor(from) + 1);
+  b = Math.min(b, Math.ceil(to));
+  return b > a ? [a, b] : [a, a];
+}
+
+/** All four taps inside the source: no bounds checks. */
+function interiorRun(src: Uint8Array | Uint8ClampedArray, sw: number, out: Uint8Array, row: number, u0: number, v0: number, ia: number, ib: number, from: number, to: number): void {
+  for (let x = from; x < to; x++) {
+    const u = u0 + ia * x;
+    const v = v0 + ib * x;
+    const x0 = u | 0;
+    const y0 = v | 0;
+    const fx = u - x0;
+    const fy = v - y0;
+    const i00 = (y0 * sw + x0) * 4;
+    const i01 = i00 + 4;
+    const i10 = i00 + sw * 4;
+    const i11 = i10 + 4;
+    const w00 = (1 - fx) * (1 - fy) * src[i00 + 3];
+    const w01 = fx * (1 - fy) * src[i01 + 3];
+    const w10 = (1 - fx) * fy * src[i10 + 3];
+    const w11 = fx * fy * src[i11 + 3];
+    const al = w00 + w01 + w10 + w11;
+    if (al <= 0) continue;
+    const o = row + x * 4;
+    const inv = 1 / al;
+    out[o] = (w00 * src[i00] + w01 * src[i01] + w10 * src[i10] + w11 * src[i11]) * inv + 0.5;
+    out[o + 1] = (w00 * src[i00 + 1] + w01 * src[i01 + 1] + w10 * src[i10 + 1] + w11 * src[i11 + 1]) * inv + 0.5;
+    out[o + 2] = (w00 * src[i00 + 2] + w01 * src[i01 + 2] + w10 * src[i10 + 2] + w11 * src[i11 + 2]) * inv + 0.5;
+    out[o + 3] = al + 0.5;
+  }
+}
+
+/** A sample near the source's border: taps outside it count as transparent (anti-aliased edge). */
+function edgePixel(src: Uint8Array | Uint8ClampedArray, sw: number, sh: number, out: Uint8Array, o: number, u: number, v: number): void {
+  const x0 = Math.floor(u);
+  const y0 = Math.floor(v);
+  const fx = u - x0;
+  const fy = v - y0;
+  let r = 0, g = 0, bl = 0, al = 0;
+  for (let k = 0; k < 4; k++) {
+    const sx = x0 + (k & 1);
+    const sy = y0 + (k >> 1);
+    if (sx < 0 || sy < 0 || sx >= sw || sy >= sh) continue;
+    const w = ((k & 1) ? fx : 1 - fx) * ((k >> 1) ? fy : 1 - fy);
+    const i = (sy * sw + sx) * 4;
+    const wa = w * src[i + 3];
+    if (wa === 0) continue;
+    r += wa * src[i];
+    g += wa * src[i + 1];
+    bl += wa * src[i + 2];
+    al += wa;
+  }
+  if (al <= 0) return;
+  out[o] = (r / al + 0.5) | 0;
+  out[o + 1] = (g / al + 0.5) | 0;
+  out[o + 2] = (bl / al + 0.5) | 0;
+  out[o + 3] = (al + 0.5) | 0;
 }
 
 /** How much the matrix shrinks the source (the smaller axis), so the caller can pre-reduce it with a proper filter. */

@@ -120,3 +120,26 @@ describe('print file encoding', () => {
     expect(Math.abs(data[2] - 228)).toBeLessThanOrEqual(3);
   });
 });
+
+describe('text in print files', () => {
+  it('draws text as filled outlines inside its box', async () => {
+    const { drawTextLayer } = await import('./text-layer');
+    const plan: RenderPlan = {
+      size: { width: 400, height: 120 }, notes: [],
+      ops: [{ kind: 'text', placementId: 't1', role: 'placement', matrix: translate(50, 20), width: 300, height: 80, opacity: 1, blendMode: 'normal', clip: null, content: 'Puffin Picnic', fontId: 'source-sans-3-700', sizePx: 60, colour: '#1f2024', align: 'centre', letterSpacing: 0, arcDeg: 0 }],
+    };
+    const { image, notes } = await renderPrintFile(plan, { loadMotif: async () => solid(1, 1, [0, 0, 0, 0]), drawText: drawTextLayer });
+    expect(notes).toEqual([]);
+    let inked = 0;
+    let outside = 0;
+    for (let y = 0; y < 120; y++) for (let x = 0; x < 400; x++) {
+      const a = image.data[(y * 400 + x) * 4 + 3];
+      if (a > 128) { if (x >= 50 && x < 350 && y >= 20 && y < 100) inked++; else outside++; }
+    }
+    // bold 60 px glyphs cover a good part of the box and nothing lands outside it
+    expect(inked).toBeGreaterThan(3000);
+    expect(outside).toBe(0);
+    const dark = [...image.data.subarray(0)].findIndex((v, i) => i % 4 === 3 && v === 255);
+    expect([...image.data.subarray(dark - 3, dark)]).toEqual([0x1f, 0x20, 0x24]);
+  });
+});

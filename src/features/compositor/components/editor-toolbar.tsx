@@ -7,13 +7,16 @@ import { zoomStep } from '../viewport';
 import { addPlacement } from '@shared/scene';
 import { frontCentre } from '../place-motifs';
 import { newTextPlacement } from '../text-measure';
-import { useEditorState } from './use-editor-state';
+import { useEditorSelector } from './use-editor-state';
 
 type EditorToolbarProps = { editor: ProductEditor; screen: () => { width: number; height: number } };
 
 export function EditorToolbar({ editor, screen }: EditorToolbarProps) {
-  const state = useEditorState(editor);
-  const has = state.selection.length > 0;
+  const state = useEditorSelector(editor, (s) => ({
+    canUndo: s.canUndo, canRedo: s.canRedo, hasSelection: s.selection.length > 0, viewport: s.viewport,
+    overlays: s.overlays, rulerUnit: s.rulerUnit, mirror: s.scene.layout.mirror,
+  }));
+  const has = state.hasSelection;
   // The toolbar's commands never cancel a drag, so a throwaway tool is enough for the context.
   const run = (command: Parameters<typeof runCommand>[1]) => runCommand(editor, command, { tool: new SelectTool(editor), screen: screen() });
   const zoom = (direction: 'in' | 'out') => {
@@ -60,7 +63,7 @@ export function EditorToolbar({ editor, screen }: EditorToolbarProps) {
       </Button>
       {isWrap && (
         <label className="flex items-center gap-1.5 px-2 text-sm" title="Copies the layout to the other side of the mug, so left- and right-handed drinkers both see it">
-          <input type="checkbox" checked={state.scene.layout.mirror} onChange={(e) => editor.change((l) => ({ ...l, mirror: e.target.checked }))} />
+          <input type="checkbox" checked={state.mirror} onChange={(e) => editor.change((l) => ({ ...l, mirror: e.target.checked }))} />
           Both sides
         </label>
       )}

@@ -2,10 +2,10 @@ import { Button } from '../../../components/ui/button';
 import { Dialog } from '../../../components/ui/dialog';
 import type { ProductEditor } from '../editor';
 import { shortcutList } from '../tools/keyboard';
-import { useEditorState } from './use-editor-state';
+import { useEditorSelector } from './use-editor-state';
 
 export function HelpSheet({ editor }: { editor: ProductEditor }) {
-  const { helpOpen } = useEditorState(editor);
+  const helpOpen = useEditorSelector(editor, (s) => s.helpOpen);
   const close = () => editor.setHelpOpen(false);
   return (
     <Dialog open={helpOpen} onClose={close} title="Keyboard shortcuts" actions={<Button data-autofocus onClick={close}>Close</Button>}>

@@ -13,16 +13,17 @@ import { NumberField } from './number-field';
 import { RecolourFields } from './recolour-fields';
 import { RepeatFields } from './repeat-fields';
 import { TextFields } from './text-fields';
-import { useEditorState } from './use-editor-state';
+import { useEditorSelector } from './use-editor-state';
 
 export function Inspector({ editor }: { editor: ProductEditor }) {
-  const state = useEditorState(editor);
-  const selected = state.scene.layout.placements.filter((p) => state.selection.includes(p.id));
+  const selected = useEditorSelector(editor, (s) => s.scene.layout.placements.filter((p) => s.selection.includes(p.id)));
+  const unit = useEditorSelector(editor, (s) => s.rulerUnit);
+  const selection = useEditorSelector(editor, (s) => s.selection);
   return (
     <aside aria-label="Selection" className="min-h-0 overflow-y-auto border-l border-sand bg-paper p-3 text-sm">
       {selected.length === 0 && <p className="text-ink-soft">Pick a placement on the product to see and change its size, turn and colour.</p>}
-      {selected.length === 1 && <SinglePlacement editor={editor} p={selected[0]} unit={state.rulerUnit} />}
-      {selected.length > 1 && <SeveralPlacements editor={editor} ids={state.selection} />}
+      {selected.length === 1 && <SinglePlacement editor={editor} p={selected[0]} unit={unit} />}
+      {selected.length > 1 && <SeveralPlacements editor={editor} ids={selection} />}
     </aside>
   );
 }

@@ -12,6 +12,7 @@ import { EditorToolbar } from './editor-toolbar';
 import { HelpSheet } from './help-sheet';
 import { Inspector } from './inspector';
 import { MotifTray } from './motif-tray';
+import { NewerVersions } from './newer-versions';
 import { SaveStatusBar } from './save-status';
 
 export type ProductEditorProps = {
@@ -84,11 +85,13 @@ export function ProductEditorView({ product, save, reload, loadThumb }: ProductE
 
   // Wider than the page column: a long mug strip needs the whole window.
   return (
-    <div className="relative left-1/2 grid h-[calc(100vh-10.5rem)] min-h-[520px] w-[calc(100vw-2rem)] -translate-x-1/2 grid-cols-[14rem_minmax(0,1fr)_17rem] grid-rows-[auto_minmax(0,1fr)] overflow-hidden rounded-lg border border-sand bg-paper">
+    <div className="relative left-1/2 grid h-[calc(100vh-10.5rem)] min-h-[520px] w-[calc(100vw-2rem)] -translate-x-1/2 grid-cols-[14rem_minmax(0,1fr)_17rem] grid-rows-[auto_auto_minmax(0,1fr)] overflow-hidden rounded-lg border border-sand bg-paper">
       <div className="col-span-3 flex flex-wrap items-center justify-between gap-2 border-b border-sand bg-paper px-3 py-2">
         <EditorToolbar editor={editor} screen={screen} />
         <SaveStatusBar autosaver={autosaver} onReload={onReload} reloading={reloading} />
       </div>
+      {/* always present, so the grid's rows stay toolbar / notice / body even with no notice */}
+      <div className="col-span-3"><NewerVersions editor={editor} uses={product.motifs} /></div>
       <MotifTray onPlace={(m) => place(m)} onPlaceOriginal={placeOriginal} />
       <div ref={canvasBox} className="min-h-0">
         <EditorCanvas editor={editor} onDropMotif={place} loadThumb={loadThumb} />

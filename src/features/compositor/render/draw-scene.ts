@@ -48,11 +48,12 @@ export function drawScene(ctx: Ctx2D, scene: Scene, template: Template, images: 
     ctx.save();
     ctx.globalAlpha = op.opacity;
     ctx.globalCompositeOperation = canvasCompositeFor(op.blendMode);
-    // Repeats keep their clip: a pattern is meant to stop at the print area.
-    if (op.clip && op.role === 'tile') {
+    // A pattern stops at the print area even in the editor's unclipped plan, as it will in print.
+    if (op.role === 'tile') {
+      const c = op.clip ?? geometry.printArea;
       setMatrix(ctx, screenM);
       ctx.beginPath();
-      ctx.rect(op.clip.x, op.clip.y, op.clip.width, op.clip.height);
+      ctx.rect(c.x, c.y, c.width, c.height);
       ctx.clip();
     }
     if (op.kind === 'motif') drawMotif(ctx, op, images, screenM);
@@ -85,7 +86,8 @@ function drawMotif(ctx: Ctx2D, op: MotifDrawOp, images: MotifImageCache, screenM
   // The plan's matrix starts from full-resolution pixels; the thumb is smaller by width/bitmap.width.
   setMatrix(ctx, compose(scale(op.width / bitmap.width, op.height / bitmap.height), op.matrix, screenM));
   ctx.imageSmoothingEnabled = true;
-  ctx.imageSmoothingQuality = 'high';
+  // 'low' (bilinear): 'high' costs several ms a frame in software rendering, and thumbs are near screen size anyway
+  ctx.imageSmoothingQuality = 'low';
   ctx.drawImage(bitmap, 0, 0);
 }
 

@@ -38,3 +38,19 @@ describe('editor shortcuts', () => {
     for (const k of ['Arrow', 'Delete', 'Z', 'Y', 'D', ']', '[', '+', '0', '?', 'Escape']) expect(text).toContain(k);
   });
 });
+
+describe('shortcuts and form fields', () => {
+  it('leaves typing in text fields alone but still works after ticking a checkbox', async () => {
+    const { isTypingTarget } = await import('./keyboard');
+    const text = document.createElement('input');
+    const box = document.createElement('input');
+    box.type = 'checkbox';
+    const slider = document.createElement('input');
+    slider.type = 'range';
+    expect(isTypingTarget(text)).toBe(true);
+    expect(isTypingTarget(slider)).toBe(true);
+    expect(isTypingTarget(box)).toBe(false);
+    expect(isTypingTarget(document.createElement('button'))).toBe(false);
+    expect(isTypingTarget(document.createElement('textarea'))).toBe(true);
+  });
+});

@@ -60,9 +60,13 @@ export const shortcutList: ReadonlyArray<{ keys: string; does: string }> = [
   { keys: '?', does: 'Show this list' },
 ];
 
+const nonTypingInputs = new Set(['checkbox', 'radio', 'button', 'submit', 'reset', 'color']);
+
 /** Typing in a field must not move placements. */
 export function isTypingTarget(target: EventTarget | null): boolean {
   if (!target || typeof (target as HTMLElement).tagName !== 'string') return false;
   const el = target as HTMLElement;
-  return el.tagName === 'INPUT' || el.tagName === 'TEXTAREA' || el.tagName === 'SELECT' || el.isContentEditable;
+  // Checkboxes and buttons take no typing, so shortcuts (undo after ticking "Half-drop") still work there.
+  if (el.tagName === 'INPUT') return !nonTypingInputs.has((el as HTMLInputElement).type);
+  return el.tagName === 'TEXTAREA' || el.tagName === 'SELECT' || el.isContentEditable;
 }

@@ -15,6 +15,8 @@ type TagInputProps = {
   allowNew?: boolean;
   disabled?: boolean;
   placeholder?: string;
+  /** When a heading right above already says what the tags are. */
+  hideLabel?: boolean;
 };
 
 const MAX_SUGGESTIONS = 8;
@@ -31,7 +33,7 @@ export function suggestTags(typed: string, suggestions: readonly TagSuggestion[]
 
 // A combobox after the WAI-ARIA "Combobox with listbox popup" pattern: arrows move through the
 // suggestions, Enter or comma adds, Backspace on an empty box removes the last tag.
-export function TagInput({ label, tags, onChange, suggestions, hint, allowNew = true, disabled, placeholder }: TagInputProps) {
+export function TagInput({ label, tags, onChange, suggestions, hint, allowNew = true, disabled, placeholder, hideLabel }: TagInputProps) {
   const id = useId();
   const [typed, setTyped] = useState('');
   const [open, setOpen] = useState(false);
@@ -56,6 +58,21 @@ export function TagInput({ label, tags, onChange, suggestions, hint, allowNew = 
     if (!tags.includes(parsed.data)) onChange([...tags, parsed.data]);
     setTyped('');
     setActive(-1);
+    setOpen(false);
+  };
+
+  // The list sits in the page's flow, so closing it moves what is below. Closing on blur would
+  // move a button between its press and its release and lose the click: close after the click
+  // (or the key) that took focus away instead.
+  const closeAfterLeaving = () => {
+    const close = () => {
+      setOpen(false);
+      setActive(-1);
+      document.removeEventListener('click', close, true);
+      document.removeEventListener('keyup', close, true);
+    };
+    document.addEventListener('click', close, true);
+    document.addEventListener('keyup', close, true);
   };
 
   const onKeyDown = (event: KeyboardEvent<HTMLInputElement>) => {
@@ -85,7 +102,7 @@ export function TagInput({ label, tags, onChange, suggestions, hint, allowNew = 
 
   return (
     <div className="flex flex-col gap-1.5">
-      <label htmlFor={id} className="font-semibold text-ink">
+      <label htmlFor={id} className={hideLabel ? 'sr-only' : 'font-semibold text-ink'}>
         {label}
       </label>
       {hint && (
@@ -113,7 +130,7 @@ export function TagInput({ label, tags, onChange, suggestions, hint, allowNew = 
           ))}
         </ul>
       )}
-      <div className="relative">
+      <div>
         <input
           id={id}
           type="text"
@@ -134,8 +151,7 @@ export function TagInput({ label, tags, onChange, suggestions, hint, allowNew = 
             setActive(-1);
             setProblem(null);
           }}
-          onFocus={() => setOpen(true)}
-          onBlur={() => setOpen(false)}
+          onBlur={closeAfterLeaving}
           onKeyDown={onKeyDown}
           className={classNames(controlClasses, problem ? 'border-rust' : 'border-sand')}
         />
@@ -144,7 +160,8 @@ export function TagInput({ label, tags, onChange, suggestions, hint, allowNew = 
             id={listId}
             role="listbox"
             aria-label={`${label}: suggestions`}
-            className="absolute inset-x-0 top-full z-30 mt-1 max-h-64 overflow-auto rounded-md border border-sand bg-paper py-1 shadow-lifted"
+            // In the flow of the page, not floating: inside a dialog (which scrolls) a floating list would be cut off.
+            className="mt-1 max-h-56 overflow-auto rounded-md border border-sand bg-paper py-1 shadow-paper"
           >
             {options.map((option, index) => (
               <li

@@ -22,6 +22,7 @@ export function MotifTagsEditor({ motif }: { motif: MotifDetail }) {
     <div className="flex flex-col gap-3">
       <TagInput
         label="Tags"
+        hideLabel
         hint="Type to pick a tag the studio already uses, or a new one; Enter or a comma adds it."
         tags={tags}
         onChange={(next) => {

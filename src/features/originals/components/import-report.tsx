@@ -104,6 +104,11 @@ export function ImportReport({ report }: { report: ImportReportDto }) {
       </ReportSection>,
     );
   }
+  if (report.skipped.length === 0 && report.unsupported.length === 0) {
+    sections.push(
+      <ReportSection key="complete" title="Nothing left out" explain="Every layer with pixels became part of a motif, and everything in the file could be drawn." />,
+    );
+  }
   if (report.notes.length > 0) {
     sections.push(
       <ReportSection key="notes" title="Notes" explain="Other things worth knowing about this import.">

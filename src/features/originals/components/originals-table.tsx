@@ -17,6 +17,7 @@ import { StatusBadge } from './status-badge';
 import { SortableHeader, TablePager } from '../../../components/ui/table-parts';
 
 const column = createColumnHelper<OriginalSummary>();
+const timeFormat = new Intl.DateTimeFormat(undefined, { hour: '2-digit', minute: '2-digit' });
 const statusOrder: Record<OriginalSummary['status'], number> = { failed: 0, importing: 1, queued: 2, ready: 3 };
 
 const columns = [
@@ -32,7 +33,15 @@ const columns = [
   column.accessor((o) => statusOrder[o.status], {
     id: 'status',
     header: 'Status',
-    cell: (info) => <StatusBadge original={info.row.original} />,
+    cell: (info) => {
+      const o = info.row.original;
+      return (
+        <span className="flex max-w-56 flex-col items-start gap-1">
+          <StatusBadge original={o} />
+          {o.status === 'failed' && o.error && <span className="line-clamp-2 text-sm text-ink-soft">{o.error.message}</span>}
+        </span>
+      );
+    },
   }),
   column.accessor('motifCount', {
     header: 'Motifs',
@@ -53,7 +62,12 @@ const columns = [
   column.accessor('fileKind', { header: 'Kind', enableSorting: false, cell: (info) => fileKindWords[info.getValue()] }),
   column.accessor('createdAt', {
     header: 'Uploaded',
-    cell: (info) => <time dateTime={info.getValue()}>{formatDay(info.getValue())}</time>,
+    cell: (info) => (
+      <time dateTime={info.getValue()} className="whitespace-nowrap">
+        {formatDay(info.getValue())}
+        <span className="block text-sm text-ink-soft">{timeFormat.format(new Date(info.getValue()))}</span>
+      </time>
+    ),
   }),
 ];
 

@@ -1,0 +1,119 @@
+// Print output speed: the 11 oz mug print file at 300 DPI rendered and PNG-encoded by our
+// renderer, against sharp's own composite() of the same pre-transformed layers in the same run;
+// and the four mug previews. `tsx scripts/bench/print-bench.ts` (no services needed).
+import { fileURLToPath } from 'node:url';
+import sharp from 'sharp';
+import { compose, degrees, radians, rotate, scale, toRadians, translate } from '../../shared/geometry';
+import type { BlendMode, MotifDrawOp, RenderPlan } from '../../shared/scene';
+import { mug11oz, templateGeometry } from '../../shared/templates';
+import { WRAP_VIEWS } from '../../shared/wrap';
+import type { SourcePixels } from '../../server/lib/image/affine-sample';
+import { renderMugPreview } from '../../server/lib/image/mug-preview';
+import { encodePrintFile } from '../../server/lib/image/print-file-encode';
+import { motifLayer, renderPrintFile } from '../../server/lib/image/print-render';
+
+export type PrintBenchResult = {
+  size: { width: number; height: number };
+  layers: number;
+  renderEncodeMs: number;
+  sharpCompositeMs: number;
+  ratio: number;
+  previewsMs: number;
+  pass: { ratio: boolean; previews: boolean };
+};
+
+// Our own demo-like artwork: soft discs with a gradient, the size of motifs cut from a 300 DPI card.
+function discMotif(size: number, hue: number): SourcePixels {
+  const data = new Uint8Array(size * size * 4);
+  const r = size / 2;
+  for (let y = 0; y < size; y++) {
+    for (let x = 0; x < size; x++) {
+      const d = Math.hypot(x + 0.5 - r, y + 0.5 - r) / r;
+      if (d > 1) continue;
+      const i = (y * size + x) * 4;
+      data[i] = (hue * 97) % 256;
+      data[i + 1] = (x * 255) / size;
+      data[i + 2] = (y * 255) / size;
+      data[i + 3] = d > 0.96 ? Math.round(((1 - d) / 0.04) * 255) : 255;
+    }
+  }
+  return { data, width: size, height: size };
+}
+
+export function demoPlanForProfile() { return demoPlan(); }
+function demoPlan(): { plan: RenderPlan; motifs: Map<string, SourcePixels> } {
+  const g = templateGeometry(mug11oz);
+  const motifs = new Map<string, SourcePixels>();
+  const ops: MotifDrawOp[] = [];
+  const modes: BlendMode[] = ['normal', 'normal', 'multiply', 'normal', 'screen', 'normal', 'normal', 'overlay'];
+  for (let i = 0; i < 8; i++) {
+    const size = 700 + 60 * i;
+    const id = `motif-${i}`;
+    motifs.set(id, discMotif(size, i));
+    const k = 0.55 + 0.06 * i;
+    const cx = g.trim.x + ((i + 0.5) / 8) * g.trim.width;
+    const cy = g.size.height / 2 + (i % 2 ? 120 : -120);
+    const m = compose(translate(-size / 2, -size / 2), scale(k), rotate(radians(toRadians(degrees(i * 11 - 30)))), translate(cx, cy));
+    ops.push({ kind: 'motif', placementId: id, role: 'placement', matrix: m, width: size, height: size, opacity: i === 5 ? 0.7 : 1, blendMode: modes[i], clip: g.printArea, motifId: id, version: 1, recolour: { kind: 'none' } });
+  }
+  return { plan: { size: g.size, ops, notes: [] }, motifs };
+}
+
+async function time<T>(fn: () => Promise<T>): Promise<{ ms: number; value: T }> {
+  const t0 = performance.now();
+  const value = await fn();
+  return { ms: performance.now() - t0, value };
+}
+
+async function best<T>(runs: number, fn: () => Promise<T>): Promise<{ ms: number; value: T }> {
+  let winner: { ms: number; value: T } | null = null;
+  for (let i = 0; i < runs; i++) {
+    const r = await time(fn);
+    if (!winner || r.ms < winner.ms) winner = r;
+  }
+  return winner!;
+}
+
+export async function benchPrint(runs = 3): Promise<PrintBenchResult> {
+  const { plan, motifs } = demoPlan();
+  const loadMotif = async (id: string) => motifs.get(id)!;
+
+  const ours = await best(runs, async () => {
+    const { image } = await renderPrintFile(plan, { loadMotif });
+    return { image, encoded: await encodePrintFile(image, mug11oz.output) };
+  });
+
+  // The peer: the same layers already transformed (not timed), composited and encoded by sharp.
+  const whole = { x: 0, y: 0, width: plan.size.width, height: plan.size.height };
+  const layers = await Promise.all(plan.ops.map((op) => motifLayer(motifs.get((op as MotifDrawOp).motifId)!, op as MotifDrawOp, op.clip ?? whole)));
+  const sharpBlend: Record<string, 'over' | 'multiply' | 'screen' | 'overlay'> = { normal: 'over', multiply: 'multiply', screen: 'screen', overlay: 'overlay' };
+  const peer = await best(runs, async () =>
+    sharp({ create: { width: plan.size.width, height: plan.size.height, channels: 4, background: { r: 0, g: 0, b: 0, alpha: 0 } } })
+      .composite(layers.flatMap((l, i) => (l ? [{ input: Buffer.from(l.data.buffer), raw: { width: l.width, height: l.height, channels: 4 as const }, left: l.left, top: l.top, blend: sharpBlend[plan.ops[i].blendMode] }] : [])))
+      .withDensity(300)
+      .png({ compressionLevel: 6, adaptiveFiltering: false })
+      .toBuffer(),
+  );
+
+  const previews = await best(runs, async () => Promise.all(WRAP_VIEWS.map((v) => renderMugPreview(ours.value.image, mug11oz, v, mug11oz.blank))));
+
+  const ratio = ours.ms / peer.ms;
+  const result: PrintBenchResult = {
+    size: plan.size,
+    layers: layers.length,
+    renderEncodeMs: Math.round(ours.ms),
+    sharpCompositeMs: Math.round(peer.ms),
+    ratio: Math.round(ratio * 100) / 100,
+    previewsMs: Math.round(previews.ms),
+    // targets from the issue: within 1.5x of sharp's composite; four previews under 1 s together
+    pass: { ratio: ratio <= 1.5, previews: previews.ms < 1000 },
+  };
+  console.log(`print file ${plan.size.width} x ${plan.size.height} px, ${layers.length} layers (best of ${runs})`);
+  console.log(`  render + PNG encode (ours):             ${result.renderEncodeMs} ms`);
+  console.log(`  sharp composite() + encode, same layers: ${result.sharpCompositeMs} ms`);
+  console.log(`  ratio ours / sharp: ${result.ratio}x (target <= 1.5x) ${result.pass.ratio ? 'PASS' : 'FAIL'}`);
+  console.log(`  four mug previews: ${result.previewsMs} ms (target < 1000 ms) ${result.pass.previews ? 'PASS' : 'FAIL'}`);
+  return result;
+}
+
+if (process.argv[1] === fileURLToPath(import.meta.url)) await benchPrint();

@@ -1,0 +1,83 @@
+import type { Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { productDetailSchema } from '../../shared/contracts/products';
+import { openBrowser, type OpenBrowser } from './support/browser';
+import { demoPassword, signIn } from './support/studio-steps';
+import '../setup/provided-context';
+
+// The compositor issue's walk-through: three Puffin Picnic motifs on an 11 oz mug wrap, one
+// dragged and the drag undone, one recoloured, and after a reload the layout is as saved.
+const appUrl = inject('appUrl');
+
+let browser: OpenBrowser;
+let page: Page;
+
+beforeAll(async () => {
+  browser = await openBrowser({ viewport: { width: 1440, height: 900 } });
+  page = await browser.newPage();
+  page.setDefaultTimeout(15_000);
+  await signIn(page, appUrl, 'ines@saltmarsh.test', demoPassword);
+});
+
+afterAll(async () => {
+  await browser?.close();
+});
+
+const across = () => page.getByLabel('Across').inputValue();
+const saved = () => page.getByTestId('save-status').filter({ hasText: /^Saved · revision \d+$/ }).waitFor({ timeout: 10_000 });
+
+describe('composing a mug wrap from the card’s motifs', () => {
+  it('places, drags, undoes and recolours, and finds the layout saved after a reload', async () => {
+    await page.goto(`${appUrl}/products`);
+    await page.getByLabel('Name').fill('Coastal Spring mug');
+    await page.getByLabel('Template').selectOption('mug-11oz');
+    await page.getByRole('button', { name: 'Start a product' }).click();
+    await page.waitForURL((u) => /\/products\/[^/]+$/.test(u.pathname));
+    const productId = new URL(page.url()).pathname.split('/').pop()!;
+    const canvas = page.getByTestId('editor-canvas');
+    await canvas.waitFor();
+    const box = (await canvas.boundingBox())!;
+    const tray = page.getByRole('list', { name: 'Motifs to place' }).getByRole('button');
+
+    await page.getByLabel('Find motifs').fill('puffin');
+    const puffins = tray.filter({ hasText: /^Puffin/ });
+    await puffins.nth(1).waitFor();
+    await puffins.nth(0).dragTo(canvas, { targetPosition: { x: box.width * 0.3, y: box.height * 0.5 } });
+    await puffins.nth(1).dragTo(canvas, { targetPosition: { x: box.width * 0.7, y: box.height * 0.5 } });
+    await page.getByLabel('Find motifs').fill('sandwich');
+    await tray.filter({ hasText: 'Sandwich' }).first().focus();
+    await page.keyboard.press('Enter');
+    await saved();
+
+    // Select the left puffin, note where it is, drag it, and undo the drag.
+    const left = { x: box.x + box.width * 0.3, y: box.y + box.height * 0.5 };
+    await page.mouse.click(left.x, left.y);
+    const before = await across();
+    await page.mouse.move(left.x, left.y);
+    await page.mouse.down();
+    for (let i = 1; i <= 8; i++) await page.mouse.move(left.x + i * 10, left.y + i * 3);
+    await page.mouse.up();
+    expect(await across()).not.toBe(before);
+    await page.keyboard.press('Control+z');
+    expect(await across()).toBe(before);
+
+    // Recolour the right-hand puffin.
+    await page.mouse.click(box.x + box.width * 0.7, box.y + box.height * 0.5);
+    await page.getByLabel('Recolour').selectOption('hue');
+    await saved();
+    await browser.screenshot(page, 'compositor-mug-wrap');
+
+    await page.reload();
+    await canvas.waitFor();
+    await saved();
+    const product = productDetailSchema.parse(await (await page.request.get(`${appUrl}/api/products/${productId}`)).json());
+    const placements = product.layout.placements;
+    expect(placements).toHaveLength(3);
+    const recoloured = placements.filter((p) => p.type !== 'text' && p.recolour.kind === 'hue');
+    expect(recoloured).toHaveLength(1);
+    await page.mouse.click(left.x, left.y);
+    expect(await across()).toBe(before);
+    // the save recorded which motifs (and versions) the product uses
+    expect(product.motifs.map((m) => m.name).sort()).toEqual([expect.stringMatching(/^Puffin/), expect.stringMatching(/^Puffin/), 'Sandwiches']);
+  });
+});
