@@ -40,8 +40,7 @@ function discMotif(size: number, hue: number): SourcePixels {
   return { data, width: size, height: size };
 }
 
-export function demoPlanForProfile() { return demoPlan(); }
-function demoPlan(): { plan: RenderPlan; motifs: Map<string, SourcePixels> } {
+export function demoPlan(): { plan: RenderPlan; motifs: Map<string, SourcePixels> } {
   const g = templateGeometry(mug11oz);
   const motifs = new Map<string, SourcePixels>();
   const ops: MotifDrawOp[] = [];

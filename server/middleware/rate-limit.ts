@@ -4,12 +4,14 @@ import { HttpError } from '../lib/http-error';
 
 // Counters live in the process; behind a load balancer each web process limits on its own,
 // which still bounds guessing to (limit x processes) per window.
-export function limitAttempts(options: { windowMs: number; limit: number; what: string; perEmail?: boolean }) {
+export function limitAttempts(options: { windowMs: number; limit: number; what: string; perEmail?: boolean; countFailuresOnly?: boolean }) {
   return rateLimit({
     windowMs: options.windowMs,
     limit: options.limit,
     standardHeaders: 'draft-7',
     legacyHeaders: false,
+    // Sign-in counts only failed guesses, so a person signing in often is never locked out.
+    skipSuccessfulRequests: options.countFailuresOnly ?? false,
     keyGenerator: (req: Request) => {
       const ip = ipKeyGenerator(req.ip ?? 'unknown');
       const email = typeof req.body?.email === 'string' ? req.body.email.trim().toLowerCase() : '';

@@ -33,7 +33,7 @@ export function authRouter(service: AuthService, config: AppConfig) {
     res.status(201).json(publicMe(me));
   });
 
-  r.post('/sign-in', 'public', limitAttempts({ windowMs, limit: config.RATE_LIMIT_SIGN_IN, what: 'sign-in', perEmail: true }), async (req, res) => {
+  r.post('/sign-in', 'public', limitAttempts({ windowMs, limit: config.RATE_LIMIT_SIGN_IN, what: 'sign-in', perEmail: true, countFailuresOnly: true }), async (req, res) => {
     const input = parseBody(req, signInRequestSchema);
     const me = await service.signIn(input);
     await establishSession(req, me.user.id, me.studioId);

@@ -23,6 +23,8 @@ export class StudioLibrary {
 
   // Replaces the given motifs with their fresh rows; ids without a row were deleted.
   apply(ids: readonly string[], fresh: readonly LibraryRecord[]) {
+    // Even without motifs (a collection renamed), remembered answers carry facet names.
+    this.changed();
     const seen = new Set<string>();
     for (const record of fresh) {
       seen.add(record.motif.id);

@@ -36,8 +36,9 @@ export function createOriginalsRepository(db: Database) {
       const [row] = await db.select({ n: sql<number>`count(*)::int` }).from(originalMotifs).where(eq(originalMotifs.originalId, originalId));
       return row?.n ?? 0;
     },
+    // Only while importing: a late progress write must never overwrite the committed 'done'.
     async setProgress(id: string, phase: ImportPhase, percent: number) {
-      await db.update(originals).set({ phase, percent: Math.round(percent) }).where(eq(originals.id, id));
+      await db.update(originals).set({ phase, percent: Math.round(percent) }).where(and(eq(originals.id, id), eq(originals.status, 'importing')));
     },
     async setStatus(id: string, status: OriginalStatus, extra: Partial<NewOriginal> = {}) {
       await db.update(originals).set({ status, ...extra }).where(eq(originals.id, id));

@@ -1,4 +1,5 @@
 import { clip, endPath, PDFDocument, popGraphicsState, pushGraphicsState, rectangle, rgb, StandardFonts, type PDFFont, type PDFPage } from 'pdf-lib';
+import sharp from 'sharp';
 import type { Rect } from '../../../shared/geometry';
 import { templateGeometry, type Template } from '../../../shared/templates';
 import { drawRulers, RULER_BAND_PT } from './proof-rulers';
@@ -54,7 +55,10 @@ export async function buildProofSheet(input: ProofSheetInput): Promise<Uint8Arra
   doc.setTitle(`Proof sheet: ${safeText(input.productName)}`);
   doc.setCreator('Motifold');
   const font = await doc.embedFont(StandardFonts.Helvetica);
-  const image = await doc.embedPng(input.png);
+  // Embedded as JPEG on white (paper is white anyway): pdf-lib passes JPEG through, while a large
+  // PNG would be decoded and re-compressed in JavaScript, seconds for an A3 at 300 DPI.
+  const jpeg = await sharp(input.png, { limitInputPixels: false }).flatten({ background: '#ffffff' }).jpeg({ quality: 90 }).toBuffer();
+  const image = await doc.embedJpg(jpeg);
   const design = printSizePt(input.template);
   const layout = tileLayout(design, input.paper);
   const g = templateGeometry(input.template);

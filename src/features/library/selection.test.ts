@@ -71,12 +71,16 @@ describe('library selection', () => {
 });
 
 describe('lasso geometry', () => {
-  // 4 columns of 100 px (tile and gap), rows of 150 px, 10 tiles: the last row holds 2.
-  const layout = { columns: 4, columnWidth: 100, rowHeight: 150, count: 10 };
+  // 4 columns of 100 px (90 px tile, 10 px gap), rows of 150 px, 10 tiles: the last row holds 2.
+  const layout = { columns: 4, columnWidth: 100, rowHeight: 150, gap: 10, count: 10 };
 
   it('finds the tiles a rectangle touches, whichever corner the drag started from', () => {
     expect(tilesInRect({ left: 150, top: 10, right: 250, bottom: 160 }, layout)).toEqual([1, 2, 5, 6]);
     expect(tilesInRect({ left: 250, top: 160, right: 150, bottom: 10 }, layout)).toEqual([1, 2, 5, 6]);
+  });
+
+  it('does not count a tile whose gap the drag started in', () => {
+    expect(tilesInRect({ left: 95, top: 145, right: 120, bottom: 200 }, layout)).toEqual([5]);
   });
 
   it('stops at the last tile of a short last row and at the grid edges', () => {

@@ -65,6 +65,8 @@ export type GridLayout = {
   /** Width of one tile and the gap after it, in CSS pixels. */
   columnWidth: number;
   rowHeight: number;
+  /** Space after each tile (right and below), which touches no tile. */
+  gap: number;
   count: number;
 };
 
@@ -73,15 +75,17 @@ export type Rect = { left: number; top: number; right: number; bottom: number };
 // Indices of the tiles a rectangle touches, by geometry alone: a virtualised grid has most of
 // its tiles unmounted, so they cannot be hit-tested in the DOM.
 export function tilesInRect(rect: Rect, layout: GridLayout): number[] {
-  const { columns, columnWidth, rowHeight, count } = layout;
+  const { columns, columnWidth, rowHeight, gap, count } = layout;
   if (columns < 1 || count < 1 || columnWidth <= 0 || rowHeight <= 0) return [];
   const left = Math.max(0, Math.min(rect.left, rect.right));
   const right = Math.max(rect.left, rect.right);
   const top = Math.max(0, Math.min(rect.top, rect.bottom));
   const bottom = Math.max(rect.top, rect.bottom);
-  const firstColumn = Math.floor(left / columnWidth);
+  // A start inside the gap after a tile does not touch that tile.
+  const after = (edge: number, size: number) => Math.floor(edge / size) + (edge % size > size - gap ? 1 : 0);
+  const firstColumn = after(left, columnWidth);
   const lastColumn = Math.min(columns - 1, Math.floor(right / columnWidth));
-  const firstRow = Math.floor(top / rowHeight);
+  const firstRow = after(top, rowHeight);
   const lastRow = Math.min(Math.ceil(count / columns) - 1, Math.floor(bottom / rowHeight));
   const indices: number[] = [];
   for (let row = firstRow; row <= lastRow; row++) {

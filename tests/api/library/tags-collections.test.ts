@@ -90,6 +90,10 @@ describe('collections', () => {
     const inLibrary = await owner.get(`/api/motifs?collectionId=${collection.id}`);
     expect(inLibrary.body.total).toBe(3);
     expect(inLibrary.body.facets.collections).toEqual([{ id: collection.id, name: 'Lantern Walk', count: 3 }]);
+    await owner.patch(`/api/collections/${collection.id}`, { name: 'Lantern Walk 2026' });
+    const renamed = await owner.get(`/api/motifs?collectionId=${collection.id}`);
+    expect(renamed.body.facets.collections[0].name).toBe('Lantern Walk 2026');
+    await owner.patch(`/api/collections/${collection.id}`, { name: 'Lantern Walk' });
     const motif = await owner.get(`/api/motifs/${motifIds[0]}`);
     expect(motif.body.collections).toEqual([{ id: collection.id, name: 'Lantern Walk' }]);
 

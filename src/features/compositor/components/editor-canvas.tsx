@@ -58,6 +58,8 @@ export function EditorCanvas({ editor, onDropMotif, loadThumb }: EditorCanvasPro
       if (isTypingTarget(e.target) || e.defaultPrevented) return;
       if (e.key === ' ') {
         spaceRef.current = true;
+        // held over the canvas, Space pans the view instead of scrolling the page
+        if (e.target === canvas) e.preventDefault();
         return;
       }
       const command = commandForKey(e);

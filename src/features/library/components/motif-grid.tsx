@@ -57,7 +57,7 @@ export function MotifGrid(props: MotifGridProps) {
   const lasso = useLasso(gridRef, selectable, {
     onLassoStart: props.onLassoStart,
     onLasso: (rect: Rect, additive: boolean) => {
-      const inside = tilesInRect(rect, { columns, columnWidth: (width + TILE_GAP_PX) / columns, rowHeight, count: total });
+      const inside = tilesInRect(rect, { columns, columnWidth: (width + TILE_GAP_PX) / columns, rowHeight, gap: TILE_GAP_PX, count: total });
       props.onLasso(inside.map((i) => motifAt(i)?.id).filter((id): id is string => Boolean(id)), additive);
     },
   });

@@ -79,13 +79,17 @@ export function MotifPage() {
         }
         actions={canEdit && <RenameMotif key={data.name} motif={data} />}
       />
-      <div className="grid gap-6 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
+      {/* Narrow screens read the left column first: picture, facts, use, versions. */}
+      <div className="grid gap-6 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)] lg:items-start">
         <div className="flex min-w-0 flex-col gap-6">
           <Card>
             <ZoomablePreview src={data.imageUrl} width={data.width} height={data.height} name={data.name} />
             <div className="mt-4">
               <MotifActions motif={data} canEdit={canEdit} />
             </div>
+          </Card>
+          <Card title="Details">
+            <MotifFacts motif={data} />
           </Card>
           <Card title="Where it is used" description="Every product placement of this motif, with the version it uses.">
             <UsageTable usage={data.usage} currentVersion={data.version} />
@@ -98,13 +102,12 @@ export function MotifPage() {
           </Card>
         </div>
         <div className="flex min-w-0 flex-col gap-6">
-          <Card title="Details">
-            <MotifFacts motif={data} />
-          </Card>
           <Card title="Main colours" description="Share of the motif's visible pixels. Choose one to find motifs in that colour.">
             <ColourSwatches colours={data.colours} />
           </Card>
-          <Card title="Tags">{canEdit ? <MotifTagsEditor motif={data} /> : <TagList tags={data.tags} />}</Card>
+          <Card title="Tags">
+            {canEdit ? <MotifTagsEditor motif={data} /> : <TagList tags={data.tags} />}
+          </Card>
           <Card title="Collections">
             <MotifCollections motif={data} canEdit={canEdit} />
           </Card>
