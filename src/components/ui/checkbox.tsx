@@ -8,14 +8,16 @@ export function Checkbox({ label, hint, className, ...rest }: CheckboxProps) {
   return (
     <div className={classNames('flex items-start gap-2', className)}>
       <input id={id} type="checkbox" className="mt-1 size-4 shrink-0 accent-tide" aria-describedby={hint ? `${id}-hint` : undefined} {...rest} />
-      <label htmlFor={id} className="text-ink">
-        {label}
+      <span>
+        <label htmlFor={id} className="text-ink">
+          {label}
+        </label>
         {hint && (
           <span id={`${id}-hint`} className="block text-sm text-ink-soft">
             {hint}
           </span>
         )}
-      </label>
+      </span>
     </div>
   );
 }

@@ -35,14 +35,16 @@ export function RadioGroup<V extends string>({ legend, name, value, options, onC
                 aria-describedby={option.hint ? `${optionId}-hint` : undefined}
                 className="mt-1 size-4 shrink-0 accent-tide"
               />
-              <label htmlFor={optionId} className="text-ink">
-                {option.label}
+              <span>
+                <label htmlFor={optionId} className="text-ink">
+                  {option.label}
+                </label>
                 {option.hint && (
                   <span id={`${optionId}-hint`} className="block text-sm text-ink-soft">
                     {option.hint}
                   </span>
                 )}
-              </label>
+              </span>
             </div>
           );
         })}

@@ -155,5 +155,5 @@ describe('export bundle', () => {
     expect(cautions).toMatch(/microwave/i);
     expect(cautions).toMatch(/heat-changing/i);
     expect(cautions).toMatch(/printer's instructions/);
-  });
+  }, 120_000);
 });

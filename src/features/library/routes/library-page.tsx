@@ -78,7 +78,9 @@ export function LibraryPage() {
         <div className="flex min-w-0 flex-1 flex-col gap-4">
           <SearchBox value={query.q} onSearch={onSearch} />
           <div className="flex flex-wrap items-center justify-between gap-3">
-            <ResultSummary query={query} total={results.total} loading={results.isPending || results.isShowingPrevious} facets={results.facets} onChange={setQuery} />
+            {!results.isError && (
+              <ResultSummary query={query} total={results.total} loading={results.isPending || results.isShowingPrevious} facets={results.facets} onChange={setQuery} />
+            )}
             <label className="flex items-center gap-2 text-sm font-semibold text-ink">
               Order
               <Select

@@ -84,7 +84,7 @@ describe('uploading an original', () => {
     const onUploaded = vi.fn();
     renderPage(<UploadPanel originals={[]} onUploaded={onUploaded} />);
     chooseFile(new File([new Uint8Array(2048)], 'lantern-walk.psd'));
-    fireEvent.click(screen.getByRole('radio', { name: /One motif per layer$/ }));
+    fireEvent.click(screen.getByRole('radio', { name: 'One motif per layer' }));
     fireEvent.click(screen.getByRole('button', { name: 'Upload and import' }));
 
     await waitFor(() => expect(FakeUpload.last?.body).toBeTruthy());
