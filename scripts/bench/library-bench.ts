@@ -27,7 +27,6 @@ export type LibraryBenchResult = {
   ilike: Percentiles;
   floor: Percentiles;
   nextPages: Percentiles;
-  cpu: { typed: Percentiles; colour: Percentiles };
   ratioP95: number;
   misspeltFound: { fuzzy: number; ilike: number };
   pass: boolean;
@@ -52,15 +51,6 @@ async function timed<T>(fn: () => Promise<T>): Promise<[number, T]> {
   return [performance.now() - started, value];
 }
 
-// CPU time of this process (client and server both live here) per call: unlike wall time, it
-// hardly grows when other programs load the machine.
-async function withCpu<T>(cpu: number[], fn: () => Promise<T>): Promise<T> {
-  const before = process.cpuUsage();
-  const value = await fn();
-  const used = process.cpuUsage(before);
-  cpu.push((used.user + used.system) / 1000);
-  return value;
-}
 
 const ilikeSql = `
   select m.id, m.name, count(*) over () as total
@@ -109,7 +99,6 @@ export async function benchLibrary(options: LibraryBenchOptions = {}): Promise<L
     const [refreshAfterEditMs] = await timed(() => search('q=puffin'));
 
     const typed: number[] = [];
-    const cpu = { typed: [] as number[], colour: [] as number[] };
     const byLength = new Map<number, number[]>();
     const slips: number[] = [];
     const colours: number[] = [];
@@ -121,7 +110,7 @@ export async function benchLibrary(options: LibraryBenchOptions = {}): Promise<L
       // word queries but differs per round makes every sample a fresh computation.
       const fresh = `&maxDistance=${12 + round / 1000}`;
       for (const q of typedQueries()) {
-        const [ms] = await withCpu(cpu.typed, () => timed(() => search(`q=${encodeURIComponent(q)}${fresh}`)));
+        const [ms] = await timed(() => search(`q=${encodeURIComponent(q)}${fresh}`));
         typed.push(ms);
         const letters = Math.min(q.length, 4);
         byLength.set(letters, [...(byLength.get(letters) ?? []), ms]);
@@ -133,7 +122,7 @@ export async function benchLibrary(options: LibraryBenchOptions = {}): Promise<L
       }
       // A different shade each round: the library keeps its last few colour answers, and this
       // measures the first time a colour is asked.
-      for (const hex of colourQueries) colours.push((await withCpu(cpu.colour, () => timed(() => search(`colour=${encodeURIComponent(shade(hex, round))}`))))[0]);
+      for (const hex of colourQueries) colours.push((await timed(() => search(`colour=${encodeURIComponent(shade(hex, round))}`)))[0]);
       // The same session and role checks around a one-row read: what any API answer costs here.
       for (let i = 0; i < 20; i++) floor.push((await timed(() => agent.get('/api/studio').expect(200)))[0]);
       for (const q of [...typedQueries(), ...misspelt]) {
@@ -160,7 +149,6 @@ export async function benchLibrary(options: LibraryBenchOptions = {}): Promise<L
       ilike: percentiles(ilike),
       floor: percentiles(floor),
       nextPages: percentiles(pages),
-      cpu: { typed: percentiles(cpu.typed), colour: percentiles(cpu.colour) },
       ratioP95: apiAll.p95 / percentiles(ilike).p95,
       misspeltFound: found,
       pass: apiAll.p95 < TYPED_TARGET_MS && percentiles(colours).p95 < COLOUR_TARGET_MS,
@@ -187,8 +175,6 @@ function printTable(r: LibraryBenchResult, log: (line: string) => void) {
   row('API, next pages of a search', r.nextPages);
   row('Postgres ILIKE, same queries', r.ilike);
   row('API floor (GET /api/studio)', r.floor);
-  row('CPU per typed query (both ends)', r.cpu.typed);
-  row('CPU per colour query (both ends)', r.cpu.colour);
   log(`ratio API p95 / ILIKE p95 (text queries): ${r.ratioP95.toFixed(2)}x — the API figure includes HTTP, session and role checks; ILIKE is the bare query`);
   log(`misspellings found: fuse.js ${r.misspeltFound.fuzzy}/${misspelt.length}, ILIKE ${r.misspeltFound.ilike}/${misspelt.length}`);
 }

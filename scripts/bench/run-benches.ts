@@ -3,6 +3,8 @@
 import { startTestServices } from '../../tests/setup/test-services';
 import { benchUnpack } from './import-bench';
 import { benchImportEndToEnd } from './import-end-to-end';
+import { benchLibrary } from './library-bench';
+import { benchPrint } from './print-bench';
 
 const only = new Set(process.argv.slice(2));
 const wanted = (name: string) => only.size === 0 || only.has(name);
@@ -17,11 +19,12 @@ try {
     await benchImportEndToEnd(peers);
   }
   if (wanted('library')) {
-    const mod = await import('./library-bench').catch(() => null);
-    if (mod && 'benchLibrary' in mod) {
-      console.log('\n== Library search against a plain Postgres ILIKE ==');
-      await (mod.benchLibrary as () => Promise<unknown>)();
-    }
+    console.log('\n== Library search against a plain Postgres ILIKE ==');
+    await benchLibrary();
+  }
+  if (wanted('print')) {
+    console.log('\n== Print file against sharp composite() of the same layers ==');
+    await benchPrint();
   }
 } finally {
   await services.stop();

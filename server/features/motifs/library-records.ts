@@ -60,7 +60,7 @@ export async function loadLibraryRecords(db: Database, studioId: string, ids?: r
       .from(collections)
       .innerJoin(collectionMotifs, eq(collectionMotifs.collectionId, collections.id))
       .where(and(eq(collections.studioId, studioId), only(collectionMotifs.motifId))),
-    motifUsageCounts(studioId, ids),
+    motifUsageCounts(db, studioId, ids),
   ]);
   const originalsOf = groupBy(links, (l) => l.motifId, (l) => l.originalId);
   const collectionsOf = groupBy(members, (m) => m.motifId, (m) => m.collectionId);

@@ -81,7 +81,7 @@ export function createMotifsService({ db, repo, cache, storage }: Deps) {
       repo.versionsOf(id),
       repo.originalOf(id, motif.originalId),
       repo.collectionsOf(id),
-      motifUsage(studioId, id),
+      motifUsage(db, studioId, id),
     ]);
     return {
       ...toMotifSummary(motif, version),
@@ -161,7 +161,7 @@ export function createMotifsService({ db, repo, cache, storage }: Deps) {
     async remove(studioId: string, id: string) {
       const row = await repo.findWithVersion(studioId, id);
       if (!row) throw notFound('That motif');
-      const usage = await motifUsage(studioId, id);
+      const usage = await motifUsage(db, studioId, id);
       if (usage.length) {
         throw conflict('motif.in_use', `This motif is used in ${usage.length} placement${usage.length === 1 ? '' : 's'}; archive it instead, or remove it from those products first.`);
       }

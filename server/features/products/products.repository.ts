@@ -2,6 +2,7 @@ import { and, desc, eq, inArray } from 'drizzle-orm';
 import type { Database } from '../../db/client';
 import { motifs, productMotifs, products } from '../../db/schema/index';
 import type { Layout } from '../../../shared/scene/layout';
+import { recordLibraryChange } from '../motifs/library-changes';
 
 export type ProductRow = typeof products.$inferSelect;
 export type MotifUse = { motifId: string; placementId: string; version: number };
@@ -29,14 +30,20 @@ export function createProductsRepository(db: Database) {
           .returning();
         if (!row) return null;
         if (uses) {
-          await tx.delete(productMotifs).where(eq(productMotifs.productId, id));
+          const before = await tx.delete(productMotifs).where(eq(productMotifs.productId, id)).returning({ motifId: productMotifs.motifId });
           if (uses.length) await tx.insert(productMotifs).values(uses.map((u) => ({ ...u, productId: id })));
+          // Usage counts feed the library's "most used" and used/unused filters in every process.
+          await recordLibraryChange(tx, studioId, [...new Set([...before.map((b) => b.motifId), ...uses.map((u) => u.motifId)])]);
         }
         return row;
       });
     },
     async remove(studioId: string, id: string) {
-      await db.delete(products).where(and(eq(products.studioId, studioId), eq(products.id, id)));
+      await db.transaction(async (tx) => {
+        const used = await tx.select({ motifId: productMotifs.motifId }).from(productMotifs).where(eq(productMotifs.productId, id));
+        await tx.delete(products).where(and(eq(products.studioId, studioId), eq(products.id, id)));
+        if (used.length) await recordLibraryChange(tx, studioId, [...new Set(used.map((u) => u.motifId))]);
+      });
     },
     async motifsOfStudio(studioId: string, ids: string[]) {
       if (ids.length === 0) return [];

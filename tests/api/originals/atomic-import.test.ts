@@ -2,24 +2,39 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createOriginalImporter, type RunUnpack } from '../../../server/features/originals/import-original';
 import { createOriginalsRepository } from '../../../server/features/originals/originals.repository';
 import { runUnpack } from '../../../server/features/originals/unpack/run-unpack';
+import { mkdtemp, writeFile } from 'node:fs/promises';
+import os from 'node:os';
+import path from 'node:path';
+import { createOriginalsCleanup } from '../../../server/features/originals/originals-cleanup';
+import { createOriginalsService } from '../../../server/features/originals/originals.service';
 import { createTestApp, signUpOwner, type ApiClient, type TestApp } from '../support/test-app';
 import { smallCardPsd } from '../support/psd-files';
 
 let t: TestApp;
 let owner: ApiClient;
+let studioId: string;
+let userId: string;
 beforeAll(async () => {
   // No workers: the test drives the importer itself, as a worker would.
   t = await createTestApp();
-  owner = (await signUpOwner(t.app, 'Atomic Studio')).client;
+  const signedUp = await signUpOwner(t.app, 'Atomic Studio');
+  owner = signedUp.client;
+  studioId = signedUp.me.studio.id;
+  userId = signedUp.me.user.id;
 }, 60_000);
 afterAll(() => t.close());
 
 describe('an import interrupted halfway', () => {
   it('shows nothing of the original until a retry from the stored file commits it all at once', async () => {
-    const upload = await owner.upload('/api/originals', smallCardPsd({ kiteColour: [42, 42, 200, 255] }), 'interrupted.psd');
-    expect(upload.status).toBe(202);
-    const id = upload.body.id as string;
+    // Stored through the real upload service, but not queued: other test files run workers on
+    // the shared queue, and this test must be the only one driving the importer.
     const repo = createOriginalsRepository(t.runtime.db.db);
+    const service = createOriginalsService({ repo, storage: t.runtime.storage, queue: { enqueueImport: async () => {} }, cleanup: createOriginalsCleanup(t.runtime.db.db, t.runtime.storage) });
+    const dir = await mkdtemp(path.join(os.tmpdir(), 'atomic-'));
+    const file = path.join(dir, 'interrupted.psd');
+    const psd = smallCardPsd({ kiteColour: [42, 42, 200, 255] });
+    await writeFile(file, psd);
+    const { id } = await service.upload({ studioId, userId, filePath: file, fileName: 'interrupted.psd', byteSize: psd.length, cut: 'groups' });
 
     // The storage goes away after the unpack, before anything is committed.
     let puts = 0;

@@ -54,6 +54,15 @@ describe('products', () => {
     expect(saved.body.motifs.map((m: { motifId: string }) => m.motifId).sort()).toEqual([motifs[0].id, motifs[1].id].sort());
     const { rows } = await t.runtime.db.pool.query('select motif_id, version from product_motifs where product_id = $1 order by placement_id', [created.body.id]);
     expect(rows).toEqual([{ motif_id: motifs[0].id, version: 1 }, { motif_id: motifs[1].id, version: 1 }]);
+    // The library answers "where used" and refuses to delete a used motif.
+    const motifPage = await owner.get(`/api/motifs/${motifs[0].id}`).expect(200);
+    expect(motifPage.body.usage).toEqual([{ productId: created.body.id, productName: 'Coastal Spring mug', stage: 'drafting', placementId: 'p1', version: 1 }]);
+    const del = await owner.delete(`/api/motifs/${motifs[0].id}`);
+    expect(del.status).toBe(409);
+    expect(del.body.error.code).toBe('motif.in_use');
+    const used = await owner.get('/api/motifs?usage=used').expect(200);
+    const items = used.body.motifs ?? used.body.items;
+    expect(items.map((m: { id: string }) => m.id).sort()).toEqual([motifs[0].id, motifs[1].id].sort());
     const reloaded = await owner.get(`/api/products/${created.body.id}`).expect(200);
     expect(reloaded.body.layout.placements.map((p: { x: number }) => p.x)).toEqual([300, 900]);
   });

@@ -46,6 +46,8 @@ export function MotifGrid(props: MotifGridProps) {
     estimateSize: () => rowHeight,
     overscan: 3,
     scrollMargin: top,
+    // Room for the bulk bar along the bottom, so a tile reached by keyboard is not hidden under it.
+    scrollPaddingEnd: 120,
   });
   useEffect(() => virtualizer.measure(), [virtualizer, rowHeight]);
   const rows = virtualizer.getVirtualItems();

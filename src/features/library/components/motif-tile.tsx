@@ -51,7 +51,7 @@ export const MotifTile = memo(function MotifTile({ motif, index, total, selectab
         data-motif-id={motif.id}
         draggable={false}
         onClick={onLinkClick}
-        className="flex min-w-0 flex-col gap-1.5 rounded-md"
+        className="flex min-w-0 scroll-mt-20 scroll-mb-32 flex-col gap-1.5 rounded-md"
       >
         <MotifThumbnail src={motif.thumbUrl} />
         <span className="truncate px-1 font-semibold text-ink group-hover:text-tide-deep" title={motif.name}>

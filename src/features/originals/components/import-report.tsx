@@ -41,7 +41,7 @@ export function ImportReport({ report }: { report: ImportReportDto }) {
     <ReportSection
       key="created"
       title={report.created === 0 ? 'No new motifs' : `${plural(report.created, 'new motif', 'new motifs')} created`}
-      explain="Layers and groups that were not in the library before."
+      explain={report.created === 0 ? 'Everything in this file was already in the library.' : 'Layers and groups that were not in the library before.'}
     />,
   );
   if (report.linkedExisting.length > 0) {

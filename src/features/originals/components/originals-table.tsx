@@ -54,7 +54,7 @@ const columns = [
       return (
         <span className="tabular-nums">
           {formatBytes(o.byteSize)}
-          {o.width && o.height ? <span className="block text-sm text-ink-soft">{`${o.width} × ${o.height} px`}</span> : null}
+          {o.width && o.height ? <span className="block text-sm whitespace-nowrap text-ink-soft">{`${o.width} × ${o.height} px`}</span> : null}
         </span>
       );
     },
