@@ -1,3 +1,4 @@
+import { displaySourcePath } from '../../../../shared/library/source-path';
 import type { ReactNode } from 'react';
 import { Link } from 'react-router-dom';
 import type { MotifDetail } from '@shared/contracts/motifs';
@@ -39,7 +40,7 @@ export function MotifFacts({ motif }: { motif: MotifDetail }) {
           {original.name}
         </Link>
       </Fact>
-      <Fact term="Layer path">{original.sourcePath}</Fact>
+      <Fact term="Layer path">{displaySourcePath(original.sourcePath)}</Fact>
       <Fact term="Place in the original">
         {original.offsetX}, {original.offsetY} px from the top left
         {original.width && original.height ? ` of ${original.width} × ${original.height} px` : ''}

@@ -1,3 +1,4 @@
+import { displaySourcePath } from '../../../../shared/library/source-path';
 import type { ReactNode } from 'react';
 import { Link } from 'react-router-dom';
 import type { ImportReportDto } from '@shared/contracts/originals';
@@ -19,7 +20,7 @@ function PathList({ items }: { items: { key: string; path: string; detail: React
     <ul className="flex flex-col gap-1">
       {items.map((item) => (
         <li key={item.key} className="flex flex-wrap gap-x-2 break-words">
-          <span className="font-semibold text-ink">{item.path}</span>
+          <span className="font-semibold text-ink">{displaySourcePath(item.path)}</span>
           <span className="text-ink-soft">{item.detail}</span>
         </li>
       ))}

@@ -1,3 +1,4 @@
+import { displaySourcePath } from '../../../../shared/library/source-path';
 import { Link } from 'react-router-dom';
 import type { OriginalDetail } from '@shared/contracts/originals';
 import { Badge } from '../../../components/ui/badge';
@@ -21,7 +22,7 @@ export function OriginalMotifs({ motifs }: { motifs: OriginalMotif[] }) {
             <MotifThumbnail src={motif.thumbUrl} />
             <span className="min-w-0 px-1">
               <span className="block font-semibold break-words text-ink group-hover:text-tide-deep">{motif.name}</span>
-              <span className="block text-sm break-words text-ink-soft">{motif.sourcePath}</span>
+              <span className="block text-sm break-words text-ink-soft">{displaySourcePath(motif.sourcePath)}</span>
               <span className="mt-1 flex flex-wrap gap-1">
                 {motif.hiddenInOriginal && <Badge tone="ochre">Hidden in the original</Badge>}
                 {motif.linkedExisting && <Badge tone="tide">Already in the library</Badge>}
