@@ -1,13 +1,13 @@
 import { and, eq, inArray } from 'drizzle-orm';
+import { commitImport } from './commit-import';
 import { createWriteStream } from 'node:fs';
 import { mkdir, mkdtemp, readFile, rm } from 'node:fs/promises';
 import os from 'node:os';
 import path from 'node:path';
 import { pipeline } from 'node:stream/promises';
 import type { Database } from '../../db/client';
-import { motifs, motifVersions, originalMotifs, originals, type ImportReport } from '../../db/schema/index';
+import { motifs, motifVersions, type ImportReport } from '../../db/schema/index';
 import type { ObjectStorage } from '../../lib/storage';
-import { recordLibraryChange } from '../motifs/library-changes';
 import { matchIncomingMotifs, type KnownMotif } from './motif-matching';
 import { motifPngKey, motifThumbKey } from './motif-keys';
 import type { OriginalsRepository } from './originals.repository';
@@ -150,92 +150,7 @@ export function createOriginalImporter({ db, repo, storage, runUnpack, tmpRoot, 
         created: 0,
       };
 
-      // Everything the user sees appears in this one transaction, or not at all.
-      const committed = await db.transaction(async (tx) => {
-        const [still] = await tx.select({ status: originals.status }).from(originals).where(eq(originals.id, originalId)).for('update');
-        if (!still || still.status !== 'importing') return false;
-        const newIds = new Map<number, string>();
-        const links: (typeof originalMotifs.$inferInsert)[] = [];
-        for (let i = 0; i < result.motifs.length; i++) {
-          const m = result.motifs[i];
-          const d = decisions[i];
-          const versionRow = (motifId: string, version: number) => ({
-            motifId,
-            studioId: original.studioId,
-            version,
-            originalId,
-            contentHash: m.contentHash,
-            dhash: m.dhash,
-            pngKey: motifPngKey(original.studioId, m.contentHash),
-            thumbKey: motifThumbKey(original.studioId, m.contentHash),
-            pngBytes: pngBytes.get(m.contentHash) ?? 0,
-            width: m.width,
-            height: m.height,
-            offsetX: m.left,
-            offsetY: m.top,
-            opacity: m.opacity,
-            blendMode: m.blendMode,
-            text: m.text ?? null,
-            colours: m.colours,
-          });
-          if (d.kind === 'new') {
-            const first = firstNewIndex.get(m.contentHash)!;
-            if (first !== i) {
-              links.push({ originalId, motifId: newIds.get(first)!, version: 1, sourcePath: m.sourcePath, position: i, linkedExisting: true });
-              report.linkedExisting.push({ sourcePath: m.sourcePath, motifId: newIds.get(first)!, motifName: result.motifs[first].name });
-              continue;
-            }
-            const [row] = await tx
-              .insert(motifs)
-              .values({
-                studioId: original.studioId,
-                originalId,
-                name: m.name,
-                sourcePath: m.sourcePath,
-                kind: original.fileKind === 'psd' ? m.kind : 'image',
-                hiddenInOriginal: m.hidden,
-                tags: m.suggestedTags,
-                suggestedTags: m.suggestedTags,
-              })
-              .returning({ id: motifs.id });
-            newIds.set(i, row.id);
-            await tx.insert(motifVersions).values(versionRow(row.id, 1));
-            links.push({ originalId, motifId: row.id, version: 1, sourcePath: m.sourcePath, position: i });
-            report.created++;
-          } else if (d.kind === 'new-version') {
-            await tx.insert(motifVersions).values(versionRow(d.motifId, d.version));
-            await tx
-              .update(motifs)
-              .set({ currentVersion: d.version, name: m.name, sourcePath: m.sourcePath, hiddenInOriginal: m.hidden, updatedAt: new Date() })
-              .where(eq(motifs.id, d.motifId));
-            links.push({ originalId, motifId: d.motifId, version: d.version, sourcePath: m.sourcePath, position: i });
-            report.newVersions.push({ sourcePath: m.sourcePath, motifId: d.motifId, version: d.version });
-          } else if (d.kind === 'unchanged') {
-            links.push({ originalId, motifId: d.motifId, version: d.version, sourcePath: m.sourcePath, position: i });
-            report.unchanged.push({ sourcePath: m.sourcePath, motifId: d.motifId });
-          } else {
-            links.push({ originalId, motifId: d.motifId, version: d.version, sourcePath: m.sourcePath, position: i, linkedExisting: true });
-            report.linkedExisting.push({ sourcePath: m.sourcePath, motifId: d.motifId, motifName: d.name });
-          }
-        }
-        if (links.length) await tx.insert(originalMotifs).values(links).onConflictDoNothing();
-        await tx
-          .update(originals)
-          .set({
-            status: 'ready',
-            phase: 'done',
-            percent: 100,
-            width: result.document.width,
-            height: result.document.height,
-            layerCount: result.document.layerCount,
-            report,
-            importedAt: new Date(),
-          })
-          .where(eq(originals.id, originalId));
-        // Last in the transaction: tells every web process's library which motifs to re-read.
-        await recordLibraryChange(tx, original.studioId, links.map((l) => l.motifId));
-        return true;
-      });
+      const committed = await commitImport(db, { original, result, decisions, firstNewIndex, pngBytes, report });
       onTimings?.({ downloadMs, unpackMs, storageMs, dbMs: lap(), unpack: result.timings, childPeakRssBytes: result.resources?.peakRssBytes });
       return committed ? 'imported' : 'skipped';
     } catch (err) {

@@ -1,4 +1,4 @@
-import type { Header, Table } from '@tanstack/react-table';
+import { flexRender, type Header, type Table } from '@tanstack/react-table';
 import type { ReactNode } from 'react';
 import { Button } from './button';
 
@@ -57,5 +57,22 @@ export function TablePager<T>({ table, noun }: { table: Table<T>; noun: string }
         </Button>
       </div>
     </nav>
+  );
+}
+
+// The header row of a TanStack table, every column sortable where its definition allows.
+export function SortableTableHead<T>({ table }: { table: Table<T> }) {
+  return (
+    <thead>
+      {table.getHeaderGroups().map((group) => (
+        <tr key={group.id} className="border-b border-sand text-left text-sm text-ink-soft">
+          {group.headers.map((header) => (
+            <SortableHeader key={header.id} header={header}>
+              {flexRender(header.column.columnDef.header, header.getContext())}
+            </SortableHeader>
+          ))}
+        </tr>
+      ))}
+    </thead>
   );
 }

@@ -12,7 +12,7 @@ import { Link } from 'react-router-dom';
 import type { MotifUsage } from '@shared/contracts/motifs';
 import { Badge } from '../../../components/ui/badge';
 import { EmptyState } from '../../../components/ui/empty-state';
-import { SortableHeader, TablePager } from '../../../components/ui/table-parts';
+import { SortableTableHead, TablePager } from '../../../components/ui/table-parts';
 
 const column = createColumnHelper<MotifUsage>();
 
@@ -58,17 +58,7 @@ export function UsageTable({ usage, currentVersion }: { usage: MotifUsage[]; cur
       <div className="overflow-x-auto">
         <table className="w-full min-w-[28rem] border-collapse">
           <caption className="sr-only">Products using this motif</caption>
-          <thead>
-            {table.getHeaderGroups().map((group) => (
-              <tr key={group.id} className="border-b border-sand text-left text-sm text-ink-soft">
-                {group.headers.map((header) => (
-                  <SortableHeader key={header.id} header={header}>
-                    {flexRender(header.column.columnDef.header, header.getContext())}
-                  </SortableHeader>
-                ))}
-              </tr>
-            ))}
-          </thead>
+          <SortableTableHead table={table} />
           <tbody>
             {table.getRowModel().rows.map((row) => (
               <tr key={row.id} className="border-b border-sand/70 last:border-0">

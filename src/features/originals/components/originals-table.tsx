@@ -14,7 +14,7 @@ import { formatDay } from '../../../lib/format';
 import { formatBytes } from '../file-check';
 import { fileKindWords } from '../import-words';
 import { StatusBadge } from './status-badge';
-import { SortableHeader, TablePager } from '../../../components/ui/table-parts';
+import { SortableTableHead, TablePager } from '../../../components/ui/table-parts';
 
 const column = createColumnHelper<OriginalSummary>();
 const timeFormat = new Intl.DateTimeFormat(undefined, { hour: '2-digit', minute: '2-digit' });
@@ -92,17 +92,7 @@ export function OriginalsTable({ originals, studioName }: { originals: OriginalS
       <div className="overflow-x-auto">
         <table className="w-full min-w-[40rem] border-collapse">
           <caption className="sr-only">Originals of {studioName}; column headers sort the table</caption>
-          <thead>
-            {table.getHeaderGroups().map((group) => (
-              <tr key={group.id} className="border-b border-sand text-left text-sm text-ink-soft">
-                {group.headers.map((header) => (
-                  <SortableHeader key={header.id} header={header}>
-                    {flexRender(header.column.columnDef.header, header.getContext())}
-                  </SortableHeader>
-                ))}
-              </tr>
-            ))}
-          </thead>
+          <SortableTableHead table={table} />
           <tbody>
             {table.getRowModel().rows.map((row) => (
               <tr key={row.id} className="border-b border-sand/70 align-top last:border-0">
