@@ -1,5 +1,5 @@
 
-import { index, integer, json, pgTable, primaryKey, text, timestamp, uniqueIndex, uuid, varchar } from 'drizzle-orm/pg-core';
+import { boolean, index, integer, json, jsonb, pgTable, primaryKey, text, timestamp, uniqueIndex, uuid, varchar } from 'drizzle-orm/pg-core';
 import type { StudioRole } from '../../../shared/auth/permissions';
 
 export const users = pgTable(
@@ -20,6 +20,10 @@ export const studios = pgTable('studios', {
   name: text('name').notNull(),
   paletteLimit: integer('palette_limit').notNull().default(6),
   readyWeeksBeforeLaunch: integer('ready_weeks_before_launch').notNull().default(8),
+  // the shop export's column names, mapped once by the user: { date: 'Sale Date', sku: 'SKU', ... }
+  salesColumnMapping: jsonb('sales_column_mapping').$type<Record<string, string>>(),
+  // how a product's sales are shared among its motifs: evenly, or by their printed area
+  salesSplitRule: text('sales_split_rule').$type<'even' | 'area'>().notNull().default('even'),
   createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
 });
 
@@ -29,6 +33,9 @@ export const memberships = pgTable(
     studioId: uuid('studio_id').notNull().references(() => studios.id, { onDelete: 'cascade' }),
     userId: uuid('user_id').notNull().references(() => users.id, { onDelete: 'cascade' }),
     role: text('role').$type<StudioRole>().notNull(),
+    // per person and studio: review requests and outcomes by e-mail, and in the app
+    notifyByEmail: boolean('notify_by_email').notNull().default(true),
+    notifyInApp: boolean('notify_in_app').notNull().default(true),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [primaryKey({ columns: [t.studioId, t.userId] }), index('memberships_user_idx').on(t.userId)],

@@ -3,3 +3,4 @@ export * from './originals';
 export * from './library';
 export * from './products';
 export * from './exports';
+export * from './product-life';

@@ -1,6 +1,7 @@
 import { index, integer, jsonb, pgTable, primaryKey, text, timestamp, uuid } from 'drizzle-orm/pg-core';
 import type { Template } from '../../../shared/templates/template-schema';
 import { studios, users } from './auth';
+import { collections } from './library';
 import { motifs } from './originals';
 
 // A studio's own templates, entered from their printer's figures (built-ins live in shared/).
@@ -33,11 +34,13 @@ export const products = pgTable(
     revision: integer('revision').notNull().default(1),
     stage: text('stage').$type<ProductStage>().notNull().default('drafting'),
     notes: text('notes').notNull().default(''),
+    // the collection it is launched with (its season window and launch date drive the calendar)
+    collectionId: uuid('collection_id').references(() => collections.id, { onDelete: 'set null' }),
     createdBy: uuid('created_by').references(() => users.id, { onDelete: 'set null' }),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
   },
-  (t) => [index('products_studio_idx').on(t.studioId, t.updatedAt)],
+  (t) => [index('products_studio_idx').on(t.studioId, t.updatedAt), index('products_collection_idx').on(t.collectionId)],
 );
 
 // "Where used": rewritten from the layout at every save.
