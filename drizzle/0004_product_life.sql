@@ -155,6 +155,7 @@ ALTER TABLE "memberships" ADD COLUMN "notify_by_email" boolean DEFAULT true NOT 
 ALTER TABLE "memberships" ADD COLUMN "notify_in_app" boolean DEFAULT true NOT NULL;--> statement-breakpoint
 ALTER TABLE "studios" ADD COLUMN "sales_column_mapping" jsonb;--> statement-breakpoint
 ALTER TABLE "studios" ADD COLUMN "sales_split_rule" text DEFAULT 'even' NOT NULL;--> statement-breakpoint
+ALTER TABLE "products" ADD COLUMN "tags" text[] DEFAULT '{}'::text[] NOT NULL;--> statement-breakpoint
 ALTER TABLE "products" ADD COLUMN "collection_id" uuid;--> statement-breakpoint
 ALTER TABLE "activity_events" ADD CONSTRAINT "activity_events_studio_id_studios_id_fk" FOREIGN KEY ("studio_id") REFERENCES "public"."studios"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE "activity_events" ADD CONSTRAINT "activity_events_actor_id_users_id_fk" FOREIGN KEY ("actor_id") REFERENCES "public"."users"("id") ON DELETE set null ON UPDATE no action;--> statement-breakpoint

@@ -14,6 +14,12 @@ export const permissionTable = {
   'exports.create': { label: 'Export print files and proof sheets', roles: ['owner', 'editor'] },
   'reviews.comment': { label: 'Comment on products', roles: ['owner', 'editor', 'reviewer'] },
   'reviews.decide': { label: 'Approve a product or ask for changes', roles: ['owner', 'reviewer'] },
+  'reviews.resolve': { label: 'Resolve comment threads and ask for reviews', roles: ['owner', 'editor'] },
+  'stages.move': { label: 'Move products between stages, edit variants and SKUs', roles: ['owner', 'editor'] },
+  'stages.override': { label: 'Move a product to ready without an approved sample', roles: ['owner'] },
+  'samples.record': { label: 'Record sample orders, photos and verdicts', roles: ['owner', 'editor'] },
+  'sales.import': { label: 'Import sales files from the shop', roles: ['owner', 'editor', 'reviewer'] },
+  'studio.data': { label: 'Export the studio\'s data and import it into an empty studio', roles: ['owner'] },
 } as const satisfies Record<string, { label: string; roles: readonly StudioRole[] }>;
 
 export type Permission = keyof typeof permissionTable;

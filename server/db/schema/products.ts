@@ -1,3 +1,4 @@
+import { sql } from 'drizzle-orm';
 import { index, integer, jsonb, pgTable, primaryKey, text, timestamp, uuid } from 'drizzle-orm/pg-core';
 import type { Template } from '../../../shared/templates/template-schema';
 import { studios, users } from './auth';
@@ -34,6 +35,8 @@ export const products = pgTable(
     revision: integer('revision').notNull().default(1),
     stage: text('stage').$type<ProductStage>().notNull().default('drafting'),
     notes: text('notes').notNull().default(''),
+    // the studio's own words for finding products ('mug', 'gift', 'bestseller')
+    tags: text('tags').array().notNull().default(sql`'{}'::text[]`),
     // the collection it is launched with (its season window and launch date drive the calendar)
     collectionId: uuid('collection_id').references(() => collections.id, { onDelete: 'set null' }),
     createdBy: uuid('created_by').references(() => users.id, { onDelete: 'set null' }),
