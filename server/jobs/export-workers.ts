@@ -12,7 +12,7 @@ import { queueNames, type ExportJobData } from './queue';
 // One export at a time per process: a print file render holds the whole canvas in memory.
 export async function startExportWorkers(runtime: Runtime): Promise<() => Promise<void>> {
   const repo = createExportsRepository(runtime.db.db);
-  const products = createProductsService(createProductsRepository(runtime.db.db), createTemplatesService(createTemplatesRepository(runtime.db.db)));
+  const products = createProductsService(createProductsRepository(runtime.db.db), createTemplatesService(createTemplatesRepository(runtime.db.db), runtime.storage));
   const runExport = createExportRunner({ repo, products, storage: runtime.storage });
   const id = await runtime.queue.boss.work<ExportJobData>(
     queueNames.exportProduct,

@@ -24,6 +24,14 @@ export function createTemplatesRepository(db: Database) {
         .returning();
       return row ?? null;
     },
+    async setGuideImageKey(studioId: string, id: string, key: string | null) {
+      const [row] = await db
+        .update(studioTemplates)
+        .set({ guideImageKey: key, updatedAt: new Date() })
+        .where(and(eq(studioTemplates.studioId, studioId), eq(studioTemplates.id, id)))
+        .returning();
+      return row ?? null;
+    },
     async remove(studioId: string, id: string) {
       await db.delete(studioTemplates).where(and(eq(studioTemplates.studioId, studioId), eq(studioTemplates.id, id)));
     },

@@ -1,8 +1,11 @@
 import { randomUUID } from 'node:crypto';
+import { rm } from 'node:fs/promises';
 import type { TemplateEntry } from '../../../shared/contracts/products';
 import { builtInTemplates, findBuiltInTemplate } from '../../../shared/templates/built-in-templates';
 import { parseTemplate, type Template } from '../../../shared/templates/template-schema';
 import { badRequest, conflict, notFound } from '../../lib/http-error';
+import type { ObjectStorage } from '../../lib/storage';
+import { guideImageKey, prepareGuideImage } from './guide-image';
 import type { TemplatesRepository } from './templates.repository';
 
 const uuidPattern = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
@@ -13,13 +16,26 @@ function validTemplate(input: unknown, id: string): Template {
   return parsed.template;
 }
 
-export function createTemplatesService(repo: TemplatesRepository) {
+const guideUrl = (row: { id: string; guideImageKey: string | null }) =>
+  row.guideImageKey ? `/api/templates/${row.id}/guide-image?v=${encodeURIComponent(row.guideImageKey.split('/').pop() ?? '')}` : null;
+
+export function createTemplatesService(repo: TemplatesRepository, storage: ObjectStorage) {
+  const studioRow = async (studioId: string, id: string) => {
+    if (!uuidPattern.test(id)) {
+      if (findBuiltInTemplate(id)) throw badRequest('template.built_in', 'Built-in templates cannot be changed; start a studio template from it instead.');
+      throw notFound('That template');
+    }
+    const row = await repo.find(studioId, id);
+    if (!row) throw notFound('That template');
+    return row;
+  };
+
   return {
     async list(studioId: string): Promise<TemplateEntry[]> {
       const [own, counts] = await Promise.all([repo.listStudio(studioId), repo.productCounts(studioId)]);
       return [
         ...builtInTemplates.map((template) => ({ template, source: 'built-in' as const, guideImageUrl: null, productCount: counts.get(template.id) ?? 0 })),
-        ...own.map((row) => ({ template: row.spec, source: 'studio' as const, guideImageUrl: null, productCount: counts.get(row.id) ?? 0 })),
+        ...own.map((row) => ({ template: row.spec, source: 'studio' as const, guideImageUrl: guideUrl(row), productCount: counts.get(row.id) ?? 0 })),
       ];
     },
 
@@ -45,11 +61,41 @@ export function createTemplatesService(repo: TemplatesRepository) {
       return row.spec;
     },
 
+    // The printer's guide drawing, shown over the editor's canvas and never printed.
+    async setGuideImage(studioId: string, id: string, filePath: string): Promise<{ guideImageUrl: string; width: number; height: number }> {
+      const row = await studioRow(studioId, id).catch(async (error: unknown) => {
+        await rm(filePath, { force: true });
+        throw error;
+      });
+      const image = await prepareGuideImage(filePath);
+      const key = guideImageKey(studioId, id, Date.now().toString(36));
+      await storage.put(key, image.data, 'image/webp');
+      const updated = await repo.setGuideImageKey(studioId, id, key);
+      // the old drawing goes only after the row points at the new one
+      if (row.guideImageKey) await storage.remove([row.guideImageKey]).catch(() => {});
+      return { guideImageUrl: guideUrl(updated ?? { id, guideImageKey: key })!, width: image.width, height: image.height };
+    },
+
+    async guideImage(studioId: string, id: string) {
+      const row = await studioRow(studioId, id);
+      if (!row.guideImageKey) throw notFound('That template\'s guide image');
+      return storage.get(row.guideImageKey);
+    },
+
+    async removeGuideImage(studioId: string, id: string) {
+      const row = await studioRow(studioId, id);
+      if (!row.guideImageKey) return;
+      await repo.setGuideImageKey(studioId, id, null);
+      await storage.remove([row.guideImageKey]).catch(() => {});
+    },
+
     async remove(studioId: string, id: string) {
-      if (!(await repo.find(studioId, id))) throw notFound('That template');
+      const row = await repo.find(studioId, id);
+      if (!row) throw notFound('That template');
       const used = (await repo.productCounts(studioId)).get(id) ?? 0;
       if (used > 0) throw conflict('template.in_use', `${used} product${used === 1 ? ' uses' : 's use'} this template; move them to another template first.`);
       await repo.remove(studioId, id);
+      if (row.guideImageKey) await storage.remove([row.guideImageKey]).catch(() => {});
     },
   };
 }
