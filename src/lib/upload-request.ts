@@ -8,6 +8,8 @@ export type UploadOptions<S extends z.ZodType> = {
   schema: S;
   onProgress?: (progress: UploadProgress) => void;
   signal?: AbortSignal;
+  /** PUT replaces a single thing (a template's guide image); POST is the default. */
+  method?: 'POST' | 'PUT';
 };
 
 type RawAnswer = { status: number; text: string };
@@ -15,14 +17,14 @@ type RawAnswer = { status: number; text: string };
 const abortError = () => new DOMException('The upload was cancelled', 'AbortError');
 
 // fetch() cannot report upload progress; XMLHttpRequest's upload.onprogress can.
-function sendForm(path: string, form: FormData, token: string, options: Pick<UploadOptions<z.ZodType>, 'onProgress' | 'signal'>) {
+function sendForm(path: string, form: FormData, token: string, options: Pick<UploadOptions<z.ZodType>, 'onProgress' | 'signal' | 'method'>) {
   return new Promise<RawAnswer>((resolve, reject) => {
     if (options.signal?.aborted) {
       reject(abortError());
       return;
     }
     const xhr = new XMLHttpRequest();
-    xhr.open('POST', `/api${path}`);
+    xhr.open(options.method ?? 'POST', `/api${path}`);
     xhr.withCredentials = true;
     xhr.setRequestHeader('accept', 'application/json');
     xhr.setRequestHeader('x-csrf-token', token);
