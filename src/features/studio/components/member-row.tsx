@@ -14,13 +14,15 @@ import type { Notice } from './notice';
 type MemberRowProps = {
   member: Member;
   isYou: boolean;
+  /** The studio's last owner cannot leave or step down (the server refuses); say why instead. */
+  isLastOwner?: boolean;
   canManage: boolean;
   onNotice: (notice: Notice) => void;
   onRemove: (member: Member) => void;
 };
 
 // A role change is chosen, then saved: arrowing through a select must not change anyone's role.
-export function MemberRow({ member, isYou, canManage, onNotice, onRemove }: MemberRowProps) {
+export function MemberRow({ member, isYou, isLastOwner = false, canManage, onNotice, onRemove }: MemberRowProps) {
   // null while the select shows the saved role; a role once someone picks another one.
   const [picked, setPicked] = useState<StudioRole | null>(null);
   const [confirmingSelfDemotion, setConfirmingSelfDemotion] = useState(false);
@@ -89,10 +91,14 @@ export function MemberRow({ member, isYou, canManage, onNotice, onRemove }: Memb
       <td className="py-3 pr-4 whitespace-nowrap text-ink-soft">{formatDay(member.joinedAt)}</td>
       {canManage && (
         <td className="py-3 text-right">
-          <Button variant="quiet" size="sm" onClick={() => onRemove(member)}>
-            {isYou ? 'Leave' : 'Remove'}
-            <VisuallyHidden> {member.name}</VisuallyHidden>
-          </Button>
+          {isLastOwner ? (
+            <span className="text-sm text-ink-soft">Only owner: make someone else an owner before leaving</span>
+          ) : (
+            <Button variant="quiet" size="sm" onClick={() => onRemove(member)}>
+              {isYou ? 'Leave' : 'Remove'}
+              <VisuallyHidden> {member.name}</VisuallyHidden>
+            </Button>
+          )}
           <Dialog
             open={confirmingSelfDemotion}
             onClose={() => setConfirmingSelfDemotion(false)}

@@ -41,6 +41,7 @@ export function MembersTable({ members, myUserId, studioName, canManage }: Membe
                 key={member.userId}
                 member={member}
                 isYou={member.userId === myUserId}
+                isLastOwner={member.role === 'owner' && members.filter((m) => m.role === 'owner').length === 1}
                 canManage={canManage}
                 onNotice={setNotice}
                 onRemove={(chosen) => {
