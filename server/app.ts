@@ -14,6 +14,7 @@ import { createInvitationsRepository } from './features/invitations/invitations.
 import { publicInvitationsRouter, studioInvitationsRouter } from './features/invitations/invitations.router';
 import { createInvitationsService } from './features/invitations/invitations.service';
 import { createStudioRepository } from './features/studio/studio.repository';
+import { STUDIO_DATA_IMPORT_PATH, studioDataBodyParser } from './features/studio-data/studio-data-body';
 import { studioRouter } from './features/studio/studio.router';
 import { createStudioService } from './features/studio/studio.service';
 import type { Mailer } from './lib/mail';
@@ -64,6 +65,8 @@ export function createApp(deps: AppDeps): Express {
     }),
   );
 
+  // The studio data import takes a larger body than any other route.
+  app.use(STUDIO_DATA_IMPORT_PATH, studioDataBodyParser);
   app.use('/api', express.json({ limit: config.JSON_LIMIT_BYTES }));
   app.use(
     '/api',

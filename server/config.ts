@@ -27,6 +27,10 @@ const configSchema = z.object({
   IMPORT_CONCURRENCY: z.coerce.number().int().min(1).max(16).default(1),
   // 1 GiB: the largest layered file a studio is likely to keep (issue's default).
   UPLOAD_LIMIT_BYTES: z.coerce.number().int().min(1024).default(1024 * 1024 * 1024),
+  // 40 MiB: above a full-size phone photo (HEIC/JPEG of 48 MP is about 10–25 MB).
+  SAMPLE_PHOTO_LIMIT_BYTES: z.coerce.number().int().min(1024).default(40 * 1024 * 1024),
+  // decoded pixels a sample photo may have (decompression-bomb guard); 120 MP covers phone cameras
+  SAMPLE_PHOTO_MAX_PIXELS: z.coerce.number().int().min(1).default(120_000_000),
   JSON_LIMIT_BYTES: z.coerce.number().int().min(1024).default(1024 * 1024),
   RATE_LIMIT_WINDOW_MS: z.coerce.number().int().min(1000).default(15 * 60 * 1000),
   RATE_LIMIT_SIGN_IN: z.coerce.number().int().min(1).default(10),

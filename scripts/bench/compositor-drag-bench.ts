@@ -45,7 +45,7 @@ try {
   const patched = await api.patch(`${appUrl}/api/products/${created.id}`, { headers: { 'x-csrf-token': token }, data: { revision: created.revision, layout: { version: LAYOUT_VERSION, placements, mirror: false } } });
   if (!patched.ok()) throw new Error(`saving the bench layout failed: HTTP ${patched.status()} ${await patched.text()}`);
 
-  await page.goto(`${appUrl}/products/${created.id}`);
+  await page.goto(`${appUrl}/products/${created.id}/layout`);
   const canvas = page.getByTestId('editor-canvas');
   await canvas.waitFor();
   await page.waitForTimeout(2_000); // thumbnails arrive

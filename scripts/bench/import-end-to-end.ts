@@ -11,7 +11,7 @@ import { openRuntime } from '../../server/runtime';
 import type { UnpackBenchRow } from './import-bench';
 import { generateBenchPsds } from './psd-fixtures';
 
-export type ImportBenchRow = { file: string; wallMs: number; timings: ImportPhaseTimings; parentPeakRssMb: number; vsImageMagick: number | null; vsFloor: number };
+export type ImportBenchRow = { file: string; wallMs: number; uploadMs: number; timings: ImportPhaseTimings; parentPeakRssMb: number; vsImageMagick: number | null; vsFloor: number };
 
 // The whole import a user waits for — upload to storage, queue row, unpack in the child, S3 puts
 // of masters and thumbnails, the DB commit — against the peers timed in the same run.
@@ -38,6 +38,7 @@ export async function benchImportEndToEnd(peers: UnpackBenchRow[], log: (line: s
       const upload = path.join(path.dirname(psd.file), `${psd.name}.upload`);
       await copyFile(psd.file, upload);
       const { id } = await service.upload({ studioId: studio.id, userId: user.id, filePath: upload, fileName: path.basename(psd.file), byteSize: (await stat(upload)).size, cut: 'layers' });
+      const uploadMs = performance.now() - started;
       const outcome = await importOriginal(id);
       const wallMs = Math.round(performance.now() - started);
       clearInterval(sampler);
@@ -45,6 +46,7 @@ export async function benchImportEndToEnd(peers: UnpackBenchRow[], log: (line: s
       const row: ImportBenchRow = {
         file: psd.name,
         wallMs,
+        uploadMs: Math.round(uploadMs),
         timings,
         parentPeakRssMb: Math.round(parentPeak / 1048576),
         vsImageMagick: peer?.imageMagickMs ? wallMs / peer.imageMagickMs : null,
@@ -53,7 +55,9 @@ export async function benchImportEndToEnd(peers: UnpackBenchRow[], log: (line: s
       rows.push(row);
       const t = row.timings;
       log(`${psd.name}: whole import ${wallMs} ms = ${row.vsImageMagick?.toFixed(2) ?? 'n/a'}x ImageMagick, ${row.vsFloor.toFixed(2)}x floor`);
-      log(`  phases: upload+download ${Math.round(t.downloadMs)} ms, unpack ${Math.round(t.unpackMs)} ms (parse ${Math.round(t.unpack?.parseMs ?? 0)}, cut ${Math.round(t.unpack?.cutMs ?? 0)}, encode ${Math.round(t.unpack?.encodeMs ?? 0)}), storage ${Math.round(t.storageMs)} ms, db ${Math.round(t.dbMs)} ms`);
+      const ms = (v: number) => `${Math.round(v)} ms`;
+      log(`  phases: upload to storage ${ms(row.uploadMs)}, claim ${ms(t.claimMs)}, download ${ms(t.downloadMs)}, unpack ${ms(t.unpackMs)} (parse ${ms(t.unpack?.parseMs ?? 0)}, cut ${ms(t.unpack?.cutMs ?? 0)}, encode ${ms(t.unpack?.encodeMs ?? 0)}),`
+        + ` storage after the unpack ${ms(t.storageMs)} (${t.storedDuringUnpack} of ${t.stored} motifs stored during the unpack), db ${ms(t.dbMs)}`);
       log(`  peak memory: unpack child ${Math.round((t.childPeakRssBytes ?? 0) / 1048576)} MB, worker process ${row.parentPeakRssMb} MB`);
     }
   } finally {

@@ -4,7 +4,9 @@ import { startTestServices } from '../../tests/setup/test-services';
 import { benchUnpack } from './import-bench';
 import { benchImportEndToEnd } from './import-end-to-end';
 import { benchLibrary } from './library-bench';
+import { benchLibraryUi } from './library-ui-bench';
 import { benchPrint } from './print-bench';
+import { benchSales } from './sales-bench';
 
 const only = new Set(process.argv.slice(2));
 const wanted = (name: string) => only.size === 0 || only.has(name);
@@ -22,9 +24,17 @@ try {
     console.log('\n== Library search against a plain Postgres ILIKE ==');
     await benchLibrary();
   }
+  if (wanted('library-ui')) {
+    console.log('\n== Library page first screen in headless Chromium against an empty studio ==');
+    await benchLibraryUi();
+  }
   if (wanted('print')) {
     console.log('\n== Print file against sharp composite() of the same layers ==');
     await benchPrint();
+  }
+  if (wanted('sales')) {
+    console.log('\n== Sales import: 50,000 rows through the service against csv-parse alone and Postgres COPY ==');
+    await benchSales();
   }
 } finally {
   await services.stop();

@@ -13,6 +13,7 @@ import { hashPassword } from '../../server/lib/passwords';
 import { openRuntime, type Runtime } from '../../server/runtime';
 import { drawDemoOriginals } from '../demo/draw-originals';
 import { demoAccounts, demoPassword, demoStudioName } from './demo-accounts';
+import { seedDemoLife } from './demo-life';
 
 async function ensureTeam(runtime: Runtime): Promise<{ studioId: string; ownerId: string }> {
   const db = runtime.db.db;
@@ -68,6 +69,7 @@ export async function seedDemo(): Promise<void> {
   try {
     const { studioId, ownerId } = await ensureTeam(runtime);
     await ensureOriginals(runtime, studioId, ownerId);
+    await seedDemoLife(runtime, studioId);
     console.log(`Demo studio "${demoStudioName}" is ready.`);
   } finally {
     await runtime.close();

@@ -13,11 +13,16 @@ import { createOriginalsCleanup } from './originals/originals-cleanup';
 import { createOriginalsRepository } from './originals/originals.repository';
 import { originalsRouter } from './originals/originals.router';
 import { createOriginalsService } from './originals/originals.service';
+import { reviewsRouters } from './reviews/reviews-routers';
+import { salesRouters } from './sales/sales-routers';
+import { samplesRouters } from './samples/samples-routers';
+import { calendarRouters } from './calendar/calendar-routers';
+import { studioDataRouters } from './studio-data/studio-data-routers';
 import { createTagsRepository } from './tags/tags.repository';
 import { tagsRouter } from './tags/tags.router';
 
 // Feature routers that need the queue or storage beyond the foundation's.
-export function featureRouters(runtime: Pick<Runtime, 'config' | 'db' | 'storage' | 'queue'>, _shared: SharedServices): Router[] {
+export function featureRouters(runtime: Pick<Runtime, 'config' | 'db' | 'storage' | 'queue' | 'mailer'>, _shared: SharedServices): Router[] {
   const { db, storage, queue, config } = runtime;
   const originals = createOriginalsService({
     repo: createOriginalsRepository(db.db),
@@ -36,5 +41,10 @@ export function featureRouters(runtime: Pick<Runtime, 'config' | 'db' | 'storage
     tagsRouter(createTagsRepository(db.db)),
     collectionsRouter(collections),
     ...productRouters(runtime),
+    ...samplesRouters(runtime),
+    ...reviewsRouters(runtime),
+    ...salesRouters(runtime),
+    ...calendarRouters(runtime),
+    ...studioDataRouters(runtime),
   ];
 }

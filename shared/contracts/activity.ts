@@ -33,3 +33,24 @@ export const activityEventSchema = z.object({
   createdAt: z.string(),
 });
 export type ActivityEvent = z.infer<typeof activityEventSchema>;
+
+// A page cursor: the last event's time in microseconds since 1970 and its id, or an ISO date-time.
+const activityCursorSchema = z.union([
+  z.string().regex(/^\d{1,17}\.[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i, 'Use the nextBefore value of the previous page'),
+  z.string().datetime({ offset: true, message: 'Use the nextBefore value of the previous page or a date-time' }),
+]);
+
+export const activityQuerySchema = z.object({
+  actor: z.string().uuid('Choose a member of this studio').optional(),
+  kind: z.enum(activityKinds, { error: 'Choose one of the listed kinds' }).optional(),
+  before: activityCursorSchema.optional(),
+  limit: z.coerce.number().int().min(1).max(100).default(30),
+});
+export type ActivityQuery = z.input<typeof activityQuerySchema>;
+
+export const activityPageSchema = z.object({
+  events: z.array(activityEventSchema),
+  // pass as `before` for the next (older) page; null on the last page
+  nextBefore: z.string().nullable(),
+});
+export type ActivityPage = z.infer<typeof activityPageSchema>;

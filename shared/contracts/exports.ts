@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { motifFactsSchema, paletteGroupSchema, PREFLIGHT_RULES, softProofSchema } from '../preflight/types';
 import { WRAP_VIEWS } from '../wrap/wrap-views';
 
 export const exportKindSchema = z.enum(['print-file', 'bundle']);
@@ -34,3 +35,28 @@ export type PreviewView = z.infer<typeof previewViewSchema>;
 
 export const previewQuerySchema = z.object({ variant: z.string().max(64).optional() });
 export const preflightQuerySchema = z.object({ variant: z.string().max(64).optional() });
+
+// The editor asks for about its canvas's size; the longer side of the returned PNG.
+export const SOFT_PROOF_SIDE = { min: 200, max: 2600, default: 1000 } as const;
+export const softProofQuerySchema = z.object({
+  mask: z.enum(['0', '1']).default('0').transform((v) => v === '1'),
+  side: z.coerce.number().int().min(SOFT_PROOF_SIDE.min).max(SOFT_PROOF_SIDE.max).default(SOFT_PROOF_SIDE.default),
+});
+
+export const findingSchema = z.object({
+  id: z.string(),
+  rule: z.enum(PREFLIGHT_RULES),
+  severity: z.enum(['ok', 'warning', 'problem']),
+  message: z.string(),
+  placementId: z.string().optional(),
+  fix: z.string(),
+});
+
+/** GET /api/products/:id/preflight: the report and the facts the server measured from the pixels. */
+export const productPreflightSchema = z.object({
+  report: z.object({ findings: z.array(findingSchema), summary: z.object({ problems: z.number(), warnings: z.number() }) }),
+  motifs: z.array(motifFactsSchema),
+  palette: z.array(paletteGroupSchema),
+  softProof: softProofSchema.extend({ deltaE: z.number(), renderWidth: z.number(), renderHeight: z.number() }),
+});
+export type ProductPreflightView = z.infer<typeof productPreflightSchema>;

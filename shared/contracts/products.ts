@@ -28,6 +28,12 @@ export const productSummarySchema = z.object({
   placementCount: z.number(),
   updatedAt: z.string(),
   createdAt: z.string(),
+  collectionId: z.string().nullable(),
+  collectionName: z.string().nullable(),
+  tags: z.array(z.string()),
+  variantCount: z.number(),
+  // the verdict of the most recent sample (ordered last); null when none was recorded
+  latestSampleVerdict: z.enum(['pending', 'approved', 'changes_needed']).nullable(),
 });
 export type ProductSummary = z.infer<typeof productSummarySchema>;
 export const productsListSchema = z.object({ products: z.array(productSummarySchema) });
@@ -62,3 +68,25 @@ export const updateProductRequestSchema = z.object({
   notes: z.string().max(20_000).optional(),
   layout: z.unknown().optional(),
 });
+
+// Product list filters; every one optional, combined with "and".
+export const productListQuerySchema = z.object({
+  stage: productStageSchema.optional(),
+  collectionId: z.string().uuid().optional(),
+  templateId: z.string().min(1).max(80).optional(),
+  tag: z.string().trim().min(1).max(40).optional(),
+});
+export type ProductListQuery = z.infer<typeof productListQuerySchema>;
+
+const productTagSchema = z.string().trim().min(1).max(40, 'Keep each tag under 40 characters');
+
+// The product's own facts outside its layout: no layout revision needed, the editor's autosave is not disturbed.
+export const updateProductDetailsRequestSchema = z
+  .object({
+    name: z.string().trim().min(1, 'Name the product').max(160).optional(),
+    notes: z.string().max(20_000, 'Keep the notes under 20,000 characters').optional(),
+    tags: z.array(productTagSchema).max(30, 'At most 30 tags').optional(),
+    collectionId: z.string().uuid('Choose a collection of this studio').nullable().optional(),
+  })
+  .refine((v) => Object.values(v).some((x) => x !== undefined), 'Change at least one detail');
+export type UpdateProductDetailsRequest = z.input<typeof updateProductDetailsRequestSchema>;

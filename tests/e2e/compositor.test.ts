@@ -29,11 +29,13 @@ const saved = () => page.getByTestId('save-status').filter({ hasText: /^Saved ·
 describe('composing a mug wrap from the card’s motifs', () => {
   it('places, drags, undoes and recolours, and finds the layout saved after a reload', async () => {
     await page.goto(`${appUrl}/products`);
-    await page.getByLabel('Name').fill('Coastal Spring mug');
-    await page.getByLabel('Template').selectOption('mug-11oz');
-    await page.getByRole('button', { name: 'Start a product' }).click();
-    await page.waitForURL((u) => /\/products\/[^/]+$/.test(u.pathname));
-    const productId = new URL(page.url()).pathname.split('/').pop()!;
+    const form = page.getByRole('form', { name: 'New product' });
+    await form.getByLabel('Name').fill('Coastal Spring mug');
+    await form.getByLabel('Template').selectOption('mug-11oz');
+    await form.getByRole('button', { name: 'Start a product' }).click();
+    // a new product opens on its layout
+    await page.waitForURL((u) => /\/products\/[^/]+\/layout$/.test(u.pathname));
+    const productId = new URL(page.url()).pathname.split('/').at(-2)!;
     const canvas = page.getByTestId('editor-canvas');
     await canvas.waitFor();
     const box = (await canvas.boundingBox())!;

@@ -57,6 +57,8 @@ export const samples = pgTable(
     currency: text('currency'),
     expectedOn: date('expected_on', { mode: 'string' }),
     receivedOn: date('received_on', { mode: 'string' }),
+    // the studio's own words about the order (tracking number, what was changed since the last one)
+    notes: text('notes').notNull().default(''),
     verdict: text('verdict').$type<SampleVerdict>().notNull().default('pending'),
     verdictNotes: text('verdict_notes').notNull().default(''),
     verdictBy: uuid('verdict_by').references(() => users.id, { onDelete: 'set null' }),
@@ -204,6 +206,8 @@ export const salesImports = pgTable(
     rowCount: integer('row_count').notNull(),
     skippedRows: integer('skipped_rows').notNull().default(0),
     mapping: jsonb('mapping').$type<Record<string, string>>().notNull(),
+    // what the import left out and why (bad rows skipped on request, rows another import already had)
+    report: jsonb('report').$type<Record<string, unknown>>().notNull().default({}),
     importedBy: uuid('imported_by').references(() => users.id, { onDelete: 'set null' }),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
   },

@@ -1,4 +1,4 @@
-import { createExportRequestSchema, downloadQuerySchema, preflightQuerySchema, previewQuerySchema, previewViewSchema } from '../../../shared/contracts/exports';
+import { createExportRequestSchema, downloadQuerySchema, preflightQuerySchema, previewQuerySchema, previewViewSchema, softProofQuerySchema } from '../../../shared/contracts/exports';
 import { notFound } from '../../lib/http-error';
 import { createRoutes } from '../../lib/routes';
 import { studioAuth } from '../../middleware/auth';
@@ -16,6 +16,16 @@ export function productExportsRouter(service: ExportsService) {
   r.get('/:id/preflight', 'studio.read', async (req, res) => {
     const { variant } = parseQuery(req, preflightQuerySchema);
     res.json(await service.preflight(studioAuth(req).studioId, idParam(req, 'id', 'That product'), variant ?? null));
+  });
+  r.get('/:id/soft-proof.png', 'studio.read', async (req, res) => {
+    const query = parseQuery(req, softProofQuerySchema);
+    const proof = await service.softProofImage(studioAuth(req).studioId, idParam(req, 'id', 'That product'), query);
+    // The share and the condition ride along, so the editor can label the view without a second request.
+    res.type('image/png').set({
+      'Cache-Control': 'private, no-cache',
+      'X-Soft-Proof-Share': proof.share.toFixed(4),
+      'X-Soft-Proof-Profile': encodeURIComponent(proof.profileName),
+    }).send(proof.png);
   });
   r.get('/:id/previews/:view.png', 'studio.read', async (req, res) => {
     const view = previewViewSchema.safeParse(req.params.view);

@@ -7,6 +7,7 @@ import type { ProductsService } from '../products/products.service';
 import type { ExportRow, ExportsRepository } from './exports.repository';
 import { productPreflight, type ProductPreflight } from './product-preflight';
 import { assertPreviewable, PREVIEW_RENDER_SIDE, productPreview } from './product-previews';
+import { productSoftProofPng } from './product-soft-proof';
 import { productSources, renderProduct } from './product-sources';
 
 type Deps = { repo: ExportsRepository; products: Pick<ProductsService, 'detail'>; storage: ObjectStorage; queue: Pick<JobQueue, 'enqueueExport'> };
@@ -47,6 +48,10 @@ export function createExportsService(deps: Deps) {
     },
     async preflight(studioId: string, productId: string, variantId: string | null): Promise<ProductPreflight> {
       return productPreflight(await productSources(deps, studioId, productId), variantId);
+    },
+    /** The design through the press profile, for the editor's "as printed" view. */
+    async softProofImage(studioId: string, productId: string, options: { side: number; mask: boolean }) {
+      return productSoftProofPng(await productSources(deps, studioId, productId), options);
     },
     async preview(studioId: string, productId: string, previewView: PreviewView, variantId: string | null): Promise<Buffer> {
       const sources = await productSources(deps, studioId, productId);

@@ -1,25 +1,36 @@
-import { and, eq, inArray } from 'drizzle-orm';
+import { and, eq, inArray, ne } from 'drizzle-orm';
 import { commitImport } from './commit-import';
 import { createWriteStream } from 'node:fs';
-import { mkdir, mkdtemp, readFile, rm } from 'node:fs/promises';
+import { mkdir, mkdtemp, rm } from 'node:fs/promises';
 import os from 'node:os';
 import path from 'node:path';
 import { pipeline } from 'node:stream/promises';
 import type { Database } from '../../db/client';
-import { motifs, motifVersions, type ImportReport } from '../../db/schema/index';
+import { motifs, motifVersions, originals, type ImportReport } from '../../db/schema/index';
 import type { ObjectStorage } from '../../lib/storage';
 import { matchIncomingMotifs, type KnownMotif } from './motif-matching';
-import { motifPngKey, motifThumbKey } from './motif-keys';
-import type { OriginalsRepository } from './originals.repository';
+import { createMotifUploads, type MotifUploads } from './motif-uploads';
+import { createOriginalsCleanup } from './originals-cleanup';
+import type { OriginalRow, OriginalsRepository } from './originals.repository';
 import type { UnpackedMotif, UnpackProgress, UnpackResult } from './unpack/unpack-result';
 import { isUnpackError } from './unpack/unpack-error';
 
 export type RunUnpack = (
   input: { filePath: string; outDir: string; cut: 'groups' | 'layers'; originalName?: string },
   onProgress?: (p: UnpackProgress) => void,
+  // each motif whose files are written, before the result
+  onMotif?: (m: UnpackedMotif) => void,
 ) => Promise<UnpackResult>;
 
-export type ImportPhaseTimings = { downloadMs: number; unpackMs: number; storageMs: number; dbMs: number; unpack?: UnpackResult['timings']; childPeakRssBytes?: number };
+// claim: the row claimed and a temp dir made; storage: what is left to store after the unpack
+// (most motifs go up while later layers decode); storedDuringUnpack: motifs stored by then.
+export type ImportPhaseTimings = {
+  claimMs: number; downloadMs: number; unpackMs: number; storageMs: number; dbMs: number;
+  storedDuringUnpack: number; stored: number; unpack?: UnpackResult['timings']; childPeakRssBytes?: number;
+};
+
+// Motifs stored at once, each as PNG and thumbnail (two requests).
+const UPLOAD_CONCURRENCY = 4;
 
 type Deps = {
   db: Database;
@@ -53,15 +64,8 @@ function throttled(fn: (phase: UnpackProgress['phase'], percent: number) => void
   };
 }
 
-async function mapLimit<T>(items: T[], limit: number, fn: (item: T) => Promise<void>) {
-  let next = 0;
-  const workers = Array.from({ length: Math.min(limit, items.length) }, async () => {
-    while (next < items.length) await fn(items[next++]);
-  });
-  await Promise.all(workers);
-}
-
 export function createOriginalImporter({ db, repo, storage, runUnpack, tmpRoot, onTimings }: Deps) {
+  const cleanup = createOriginalsCleanup(db, storage);
   async function knownMotifsOf(originalId: string): Promise<KnownMotif[]> {
     const rows = await repo.motifsOf(originalId);
     return rows.map((r) => ({ motifId: r.motif.id, name: r.motif.name, sourcePath: r.link.sourcePath, contentHash: r.version.contentHash, version: r.motif.currentVersion }));
@@ -79,48 +83,63 @@ export function createOriginalImporter({ db, repo, storage, runUnpack, tmpRoot, 
     return map;
   }
 
-  // Returns each stored PNG's size in bytes, by content hash.
-  async function storeMotifFiles(studioId: string, outDir: string, toStore: UnpackedMotif[], onDone: (n: number) => void) {
-    let done = 0;
-    const sizes = new Map<string, number>();
-    await mapLimit(toStore, 4, async (m) => {
-      const [png, thumb] = await Promise.all([readFile(path.join(outDir, m.pngFile)), readFile(path.join(outDir, m.thumbFile))]);
-      await Promise.all([
-        storage.put(motifPngKey(studioId, m.contentHash), png, 'image/png'),
-        storage.put(motifThumbKey(studioId, m.contentHash), thumb, 'image/webp'),
-      ]);
-      sizes.set(m.contentHash, png.byteLength);
-      onDone(++done);
-    });
-    return sizes;
+  async function studioHasPixels(studioId: string, contentHash: string): Promise<boolean> {
+    const [row] = await db
+      .select({ id: motifVersions.id })
+      .from(motifVersions)
+      .where(and(eq(motifVersions.studioId, studioId), eq(motifVersions.contentHash, contentHash)))
+      .limit(1);
+    return Boolean(row);
+  }
+
+  // Objects this import put that no row refers to (the import failed, or its original went) are
+  // removed; not while another import of the studio runs, which may be about to commit the same
+  // pixels under the same keys (a retry or a later import stores them again anyway).
+  async function discardUnreferenced(original: OriginalRow, uploads: MotifUploads): Promise<void> {
+    const keys = await uploads.settledKeys();
+    if (keys.length === 0) return;
+    const [busy] = await db
+      .select({ id: originals.id })
+      .from(originals)
+      .where(and(eq(originals.studioId, original.studioId), eq(originals.status, 'importing'), ne(originals.id, original.id)))
+      .limit(1);
+    if (busy) return;
+    await storage.remove(await cleanup.unreferencedKeys(keys));
   }
 
   return async function importOriginal(originalId: string): Promise<ImportOutcome> {
+    let mark = performance.now();
+    const lap = () => {
+      const now = performance.now();
+      const ms = now - mark;
+      mark = now;
+      return ms;
+    };
     const original = await repo.claimForImport(originalId);
     if (!original) return 'skipped';
     const workDir = await mkdtemp(path.join(tmpRoot ?? os.tmpdir(), 'motifold-import-'));
+    const outDir = path.join(workDir, 'out');
+    const claimMs = lap();
     const progress = throttled((phase, percent) => {
       const [from, to] = unpackWeight[phase];
       void repo.setProgress(originalId, phase, from + ((to - from) * percent) / 100).catch(() => {});
     });
+    const uploads = createMotifUploads({
+      storage, studioId: original.studioId, outDir, concurrency: UPLOAD_CONCURRENCY,
+      studioHasPixels: (hash) => studioHasPixels(original.studioId, hash),
+    });
     try {
-      let mark = performance.now();
-      const lap = () => {
-        const now = performance.now();
-        const ms = now - mark;
-        mark = now;
-        return ms;
-      };
       const filePath = path.join(workDir, 'original');
-      const stored = await storage.get(original.storageKey);
+      const [stored] = await Promise.all([storage.get(original.storageKey), mkdir(outDir)]);
       await pipeline(stored.body, createWriteStream(filePath));
-      const outDir = path.join(workDir, 'out');
-      await mkdir(outDir, { recursive: true });
       const downloadMs = lap();
-      const result = await runUnpack({ filePath, outDir, cut: original.cut, originalName: original.name }, progress);
+      // read while the file unpacks; awaited (and its failure seen) after the unpack
+      const previousMotifs = settledLater(original.previousOriginalId ? knownMotifsOf(original.previousOriginalId) : Promise.resolve([]));
+      const result = await runUnpack({ filePath, outDir, cut: original.cut, originalName: original.name }, progress, (m) => uploads.early(m));
       const unpackMs = lap();
+      const storedDuringUnpack = uploads.completed;
 
-      const previous = original.previousOriginalId ? await knownMotifsOf(original.previousOriginalId) : [];
+      const previous = await previousMotifs();
       const studioByHash = await studioMotifsByHash(original.studioId, result.motifs.map((m) => m.contentHash));
       const { decisions, removed } = matchIncomingMotifs(result.motifs, previous, studioByHash);
 
@@ -135,9 +154,11 @@ export function createOriginalImporter({ db, repo, storage, runUnpack, tmpRoot, 
         }
       });
       await repo.setProgress(originalId, 'storing', 80);
-      const pngBytes = await storeMotifFiles(original.studioId, outDir, toStore, (n) => {
+      const pngBytes = await uploads.store(toStore, (n) => {
         if (n % 4 === 0) void repo.setProgress(originalId, 'storing', 80 + (15 * n) / toStore.length).catch(() => {});
       });
+      // every early upload has ended before the temp files go
+      await uploads.settledKeys();
       const storageMs = lap();
       await repo.setProgress(originalId, 'finishing', 95);
 
@@ -151,15 +172,22 @@ export function createOriginalImporter({ db, repo, storage, runUnpack, tmpRoot, 
       };
 
       const committed = await commitImport(db, { original, result, decisions, firstNewIndex, pngBytes, report });
-      onTimings?.({ downloadMs, unpackMs, storageMs, dbMs: lap(), unpack: result.timings, childPeakRssBytes: result.resources?.peakRssBytes });
+      onTimings?.({
+        claimMs, downloadMs, unpackMs, storageMs, dbMs: lap(), storedDuringUnpack, stored: toStore.length,
+        unpack: result.timings, childPeakRssBytes: result.resources?.peakRssBytes,
+      });
+      if (!committed) await discardUnreferenced(original, uploads).catch(() => {});
       return committed ? 'imported' : 'skipped';
     } catch (err) {
       if (isUnpackError(err)) {
         // A file we cannot read fails the same way every time: no retry, a clear message.
         await repo.setStatus(originalId, 'failed', { phase: 'done', error: err.toValue() });
+        await discardUnreferenced(original, uploads).catch(() => {});
         return 'failed';
       }
       // Storage or database trouble: back to the queue; the job is retried from the stored file.
+      // What this attempt stored goes first, so a retry cannot be storing the same keys meanwhile.
+      await discardUnreferenced(original, uploads).catch(() => {});
       await repo
         .setStatus(originalId, 'queued', { phase: 'queued', percent: 0, error: { code: 'import.retrying', message: `The import was interrupted (${(err as Error).message}); it will be retried.` } })
         .catch(() => {});
@@ -168,6 +196,12 @@ export function createOriginalImporter({ db, repo, storage, runUnpack, tmpRoot, 
       await rm(workDir, { recursive: true, force: true });
     }
   };
+}
+
+// A promise awaited later: its rejection is seen then, not reported as unhandled meanwhile.
+function settledLater<T>(promise: Promise<T>): () => Promise<T> {
+  promise.catch(() => {});
+  return () => promise;
 }
 
 export type OriginalImporter = ReturnType<typeof createOriginalImporter>;

@@ -1,14 +1,14 @@
-import { createProductRequestSchema, updateProductRequestSchema } from '../../../shared/contracts/products';
+import { createProductRequestSchema, productListQuerySchema, updateProductDetailsRequestSchema, updateProductRequestSchema } from '../../../shared/contracts/products';
 import { createRoutes } from '../../lib/routes';
 import { studioAuth } from '../../middleware/auth';
 import { idParam } from '../../middleware/params';
-import { parseBody } from '../../middleware/validate';
+import { parseBody, parseQuery } from '../../middleware/validate';
 import type { ProductsService } from './products.service';
 
 export function productsRouter(service: ProductsService) {
   const r = createRoutes('/api/products');
   r.get('/', 'studio.read', async (req, res) => {
-    res.json({ products: await service.list(studioAuth(req).studioId) });
+    res.json({ products: await service.list(studioAuth(req).studioId, parseQuery(req, productListQuerySchema)) });
   });
   r.post('/', 'products.compose', async (req, res) => {
     const auth = studioAuth(req);
@@ -20,6 +20,10 @@ export function productsRouter(service: ProductsService) {
   r.patch('/:id', 'products.compose', async (req, res) => {
     const input = parseBody(req, updateProductRequestSchema);
     res.json(await service.update(studioAuth(req).studioId, idParam(req, 'id', 'That product'), input));
+  });
+  r.patch('/:id/details', 'products.compose', async (req, res) => {
+    const input = parseBody(req, updateProductDetailsRequestSchema);
+    res.json(await service.updateDetails(studioAuth(req).studioId, idParam(req, 'id', 'That product'), input));
   });
   r.delete('/:id', 'products.compose', async (req, res) => {
     await service.remove(studioAuth(req).studioId, idParam(req, 'id', 'That product'));

@@ -1,9 +1,10 @@
-import type { ProductDetail, ProductSummary } from '../../../shared/contracts/products';
+import type { ProductDetail, ProductListQuery, ProductSummary } from '../../../shared/contracts/products';
 import { emptyLayout, type Layout } from '../../../shared/scene/layout';
 import { readSavedLayout } from '../../../shared/scene/migrate-layout';
 import type { Template } from '../../../shared/templates/template-schema';
 import { badRequest, conflict, notFound } from '../../lib/http-error';
 import type { TemplatesService } from '../templates/templates.service';
+import type { ProductExtras } from './product-extras';
 import type { MotifUse, ProductRow, ProductsRepository } from './products.repository';
 
 // The detail as the server holds it: the layout stays the shared, read-only scene type.
@@ -13,7 +14,14 @@ function motifUses(layout: Layout): MotifUse[] {
   return layout.placements.flatMap((p) => (p.type === 'motif' || p.type === 'repeat' ? [{ motifId: p.motifId, placementId: p.id, version: p.version }] : []));
 }
 
-function summary(row: ProductRow, template: Template): ProductSummary {
+const noExtras: ProductExtras = { collectionName: null, variantCount: 0, latestSampleVerdict: null };
+
+// Tags are the studio's own words: compared lower-cased, each once, in the order given.
+export function normaliseProductTags(tags: string[]): string[] {
+  return [...new Set(tags.map((t) => t.trim().replace(/\s+/g, ' ').toLowerCase()).filter(Boolean))];
+}
+
+function summary(row: ProductRow, template: Template, extras: ProductExtras = noExtras): ProductSummary {
   const layout = row.layout as Layout;
   return {
     id: row.id,
@@ -25,6 +33,9 @@ function summary(row: ProductRow, template: Template): ProductSummary {
     placementCount: layout.placements?.length ?? 0,
     updatedAt: row.updatedAt.toISOString(),
     createdAt: row.createdAt.toISOString(),
+    collectionId: row.collectionId,
+    tags: row.tags,
+    ...extras,
   };
 }
 
@@ -52,7 +63,8 @@ export function createProductsService(repo: ProductsRepository, templates: Templ
       entry.usedVersion = Math.min(entry.usedVersion, u.version);
       byMotif.set(u.motifId, entry);
     }
-    return { ...summary(row, template), notes: row.notes, template, layout, motifs: [...byMotif.values()] };
+    const extras = (await repo.extras(studioId, [row])).get(row.id);
+    return { ...summary(row, template, extras), notes: row.notes, template, layout, motifs: [...byMotif.values()] };
   }
 
   // Every motif a layout names must be this studio's, at a version that exists.
@@ -70,13 +82,14 @@ export function createProductsService(repo: ProductsRepository, templates: Templ
 
   return {
     detail,
-    async list(studioId: string): Promise<ProductSummary[]> {
-      const rows = await repo.list(studioId);
+    async list(studioId: string, filters: ProductListQuery = {}): Promise<ProductSummary[]> {
+      const rows = await repo.list(studioId, filters);
+      const extras = await repo.extras(studioId, rows);
       const cache = new Map<string, Template>();
       const out: ProductSummary[] = [];
       for (const row of rows) {
         if (!cache.has(row.templateId)) cache.set(row.templateId, await templateOf(studioId, row.templateId).catch(() => ({ name: 'Missing template' }) as Template));
-        out.push(summary(row, cache.get(row.templateId)!));
+        out.push(summary(row, cache.get(row.templateId)!, extras.get(row.id)));
       }
       return out;
     },
@@ -100,6 +113,15 @@ export function createProductsService(repo: ProductsRepository, templates: Templ
       if (!row) {
         throw conflict('product.stale', `This product was saved elsewhere (now revision ${existing.revision}, you edited revision ${input.revision}). Reload it to see the newer layout; your changes here were not saved.`);
       }
+      return detail(studioId, id);
+    },
+    // Name, notes, tags and collection: not part of the layout, so no layout revision is needed.
+    async updateDetails(studioId: string, id: string, input: { name?: string; notes?: string; tags?: string[]; collectionId?: string | null }) {
+      if (!(await repo.find(studioId, id))) throw notFound('That product');
+      if (input.collectionId && !(await repo.hasCollection(studioId, input.collectionId))) {
+        throw badRequest('product.unknown_collection', 'That collection is not one of this studio’s collections.', { collectionId: 'Choose a collection of this studio' });
+      }
+      await repo.updateDetails(studioId, id, { ...input, tags: input.tags && normaliseProductTags(input.tags) });
       return detail(studioId, id);
     },
     async remove(studioId: string, id: string) {

@@ -14,7 +14,15 @@ export const SOFT_PROOF_DELTA_E = 5;
 // Pixels less covered than this are mostly bare blank and are not counted (a team choice).
 const INK_ALPHA = 128;
 
-export type SoftProofResult = SoftProof & { profileName: string; movedMask: Uint8Array; width: number; height: number };
+export type SoftProofResult = SoftProof & {
+  profileName: string;
+  /** 255 where an inked pixel moved more than SOFT_PROOF_DELTA_E. */
+  movedMask: Uint8Array;
+  /** The design as the press would show it: sRGB after the round trip, 3 channels, flattened on white. */
+  proofed: Buffer;
+  width: number;
+  height: number;
+};
 
 /**
  * Sends the render RGB → CMYK (the press profile, sharp/lcms default intent) → sRGB and measures,
@@ -49,5 +57,5 @@ export async function softProof(image: SourcePixels): Promise<SoftProofResult> {
       movedMask[p] = 255;
     }
   }
-  return { shareOverDeltaE5: inked === 0 ? 0 : moved / inked, profileName: PRESS_PROFILE_NAME, movedMask, width, height };
+  return { shareOverDeltaE5: inked === 0 ? 0 : moved / inked, profileName: PRESS_PROFILE_NAME, movedMask, proofed: back, width, height };
 }

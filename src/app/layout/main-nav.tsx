@@ -5,6 +5,10 @@ export const mainNavItems = [
   { to: '/library', label: 'Library' },
   { to: '/originals', label: 'Originals' },
   { to: '/products', label: 'Products' },
+  { to: '/calendar', label: 'Calendar' },
+  { to: '/sales', label: 'What sells' },
+  { to: '/templates', label: 'Templates' },
+  { to: '/activity', label: 'Activity' },
   { to: '/members', label: 'Members' },
   { to: '/settings', label: 'Settings' },
 ] as const;

@@ -1,5 +1,6 @@
 import { Link } from 'react-router-dom';
 import { MotifoldWordmark } from '../../components/brand/motifold-mark';
+import { NotificationsControl } from '../../features/notifications/components/notifications-control';
 import { MainNav } from './main-nav';
 import { StudioSwitcher } from './studio-switcher';
 import { UserMenu } from './user-menu';
@@ -17,6 +18,7 @@ export function TopBar() {
         </div>
         <div className="ml-auto flex min-w-0 items-center gap-3 lg:ml-0">
           <StudioSwitcher />
+          <NotificationsControl />
           <UserMenu />
         </div>
       </div>

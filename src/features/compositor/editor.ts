@@ -4,6 +4,7 @@ import {
   type History, type Layout, type Scene, type SnapGuide,
 } from '@shared/scene';
 import { templateGeometry, type Template, type TemplateGeometry } from '@shared/templates';
+import type { MotifBitmap } from './render/image-cache';
 import { defaultOverlays, type OverlayName, type OverlaySettings, type RulerUnit } from './overlay-settings';
 import { fitViewport, type Viewport } from './viewport';
 
@@ -23,6 +24,8 @@ export type EditorState = {
   /** The layout as of the last finished change (not a gesture in progress): what autosave saves. */
   readonly committedLayout: Layout;
   readonly helpOpen: boolean;
+  /** The server's soft proof of the saved design, drawn instead of the artwork while "as printed" is on. */
+  readonly printView: MotifBitmap | null;
 };
 
 type Listener = () => void;
@@ -50,7 +53,7 @@ export class ProductEditor {
     this.history = createHistory(scene, HISTORY_LIMIT);
     this.state = {
       scene, selection: [], viewport, overlays: defaultOverlays, rulerUnit: template.unit,
-      guides: [], marquee: null, canUndo: false, canRedo: false, committedLayout: scene.layout, helpOpen: false,
+      guides: [], marquee: null, canUndo: false, canRedo: false, committedLayout: scene.layout, helpOpen: false, printView: null,
     };
   }
 
@@ -164,6 +167,10 @@ export class ProductEditor {
 
   setHelpOpen(helpOpen: boolean): void {
     if (helpOpen !== this.state.helpOpen) this.set({ helpOpen });
+  }
+
+  setPrintView(printView: MotifBitmap | null): void {
+    if (printView !== this.state.printView) this.set({ printView });
   }
 
   /** After loading a saved layout (e.g. reload after a conflict): a fresh history. */

@@ -1,7 +1,9 @@
 import { pointsToPixels } from '@shared/templates';
 import { createTextPlacement, type TextPlacement } from '@shared/scene';
 import type { Vec } from '@shared/geometry';
-import { TEXT_FONT_FAMILY } from './render/draw-scene';
+import { resolveFontId, shippedFonts } from '@shared/text/shipped-fonts';
+import { layoutLines } from '@shared/text/text-layout';
+import { fontCache } from './render/font-cache';
 
 /** Width in px of one line at `sizePx`, without letter spacing. */
 export type MeasureLine = (line: string, sizePx: number) => number;
@@ -19,21 +21,27 @@ export function measureTextBox(content: string, sizePx: number, letterSpacingTho
 
 let measuringContext: CanvasRenderingContext2D | null = null;
 
-/** Measures with the browser's copy of the shipped font (outlines from opentype.js are a later step). */
-export const measureWithCanvas: MeasureLine = (line, sizePx) => {
-  measuringContext ??= typeof document === 'undefined' ? null : document.createElement('canvas').getContext('2d');
-  if (!measuringContext) return line.length * sizePx * 0.5;
-  measuringContext.font = `${sizePx}px ${TEXT_FONT_FAMILY}`;
-  return measuringContext.measureText(line).width;
-};
+/** A measure for one font: its glyph outlines once loaded (as the print file lays them out), the page's font until then. */
+export function measureFor(fontId: string): MeasureLine {
+  return (line, sizePx) => {
+    const stack = fontCache.get(fontId);
+    if (stack) return layoutLines({ content: line, sizePx, letterSpacing: 0 }, stack).lines[0].width;
+    measuringContext ??= typeof document === 'undefined' ? null : document.createElement('canvas').getContext('2d');
+    if (!measuringContext) return line.length * sizePx * 0.5;
+    measuringContext.font = `${sizePx}px "${resolveFontId(fontId).font.name}", sans-serif`;
+    return measuringContext.measureText(line).width;
+  };
+}
+
+export const measureWithCanvas: MeasureLine = measureFor('source-sans-3');
 
 /** The same text with its box measured again after a change of content, size or spacing. */
-export function remeasured(p: TextPlacement, dpi: number, measure: MeasureLine = measureWithCanvas): TextPlacement {
+export function remeasured(p: TextPlacement, dpi: number, measure: MeasureLine = measureFor(p.fontId)): TextPlacement {
   const box = measureTextBox(p.content, pointsToPixels(p.sizePt, dpi), p.letterSpacing, measure);
   return box.width === p.boxWidth && box.height === p.boxHeight ? p : { ...p, boxWidth: box.width, boxHeight: box.height };
 }
 
-export const SHIPPED_FONTS = [{ id: 'source-sans-3', name: 'Source Sans 3' }] as const;
+export const SHIPPED_FONTS = shippedFonts.map((f) => ({ id: f.id, name: `${f.name} (${f.character})` }));
 
 export function newTextPlacement(at: Vec, dpi: number, measure: MeasureLine = measureWithCanvas, id: string = globalThis.crypto.randomUUID()): TextPlacement {
   const content = 'Coastal Spring';

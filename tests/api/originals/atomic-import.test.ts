@@ -2,6 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createOriginalImporter, type RunUnpack } from '../../../server/features/originals/import-original';
 import { createOriginalsRepository } from '../../../server/features/originals/originals.repository';
 import { runUnpack } from '../../../server/features/originals/unpack/run-unpack';
+import { UnpackError } from '../../../server/features/originals/unpack/unpack-error';
 import { mkdtemp, writeFile } from 'node:fs/promises';
 import os from 'node:os';
 import path from 'node:path';
@@ -50,6 +51,8 @@ describe('an import interrupted halfway', () => {
     expect(during.body.motifs).toHaveLength(0);
     const library = await owner.get('/api/motifs');
     expect(library.body.motifs.filter((m: { originalId: string }) => m.originalId === id)).toHaveLength(0);
+    // the motifs it stored while unpacking are gone again: no row refers to them
+    expect(await t.runtime.storage.list(`studios/${studioId}/motifs/`)).toEqual([]);
 
     const healthy = createOriginalImporter({ db: t.runtime.db.db, repo, storage: t.runtime.storage, runUnpack: runUnpack as RunUnpack });
     expect(await healthy(id)).toBe('imported');
@@ -58,5 +61,37 @@ describe('an import interrupted halfway', () => {
     expect(after.body.motifs).toHaveLength(3);
     // A second delivery of the same job finds it done and changes nothing.
     expect(await healthy(id)).toBe('skipped');
+    expect(await t.runtime.storage.list(`studios/${studioId}/motifs/`)).toHaveLength(6);
+  }, 60_000);
+
+  it('leaves no stored motif behind when the file turns out unreadable after some motifs were stored', async () => {
+    const repo = createOriginalsRepository(t.runtime.db.db);
+    const service = createOriginalsService({ repo, storage: t.runtime.storage, queue: { enqueueImport: async () => {} }, cleanup: createOriginalsCleanup(t.runtime.db.db, t.runtime.storage) });
+    const dir = await mkdtemp(path.join(os.tmpdir(), 'atomic-'));
+    const file = path.join(dir, 'broken-late.psd');
+    const psd = smallCardPsd({ kiteColour: [200, 42, 42, 255] });
+    await writeFile(file, psd);
+    const { id } = await service.upload({ studioId, userId, filePath: file, fileName: 'broken-late.psd', byteSize: psd.length, cut: 'groups' });
+    const before = await t.runtime.storage.list(`studios/${studioId}/motifs/`);
+
+    // every motif announced (and stored) before a layer further on proves unreadable
+    let announced = 0;
+    const failingLate: RunUnpack = async (input, onProgress, onMotif) => {
+      await runUnpack(input, onProgress, (m) => {
+        announced++;
+        onMotif?.(m);
+      });
+      throw new UnpackError('psd.corrupt', 'The PSD file could not be read (layer 4 is damaged); it is damaged or truncated');
+    };
+    const importer = createOriginalImporter({ db: t.runtime.db.db, repo, storage: t.runtime.storage, runUnpack: failingLate });
+    expect(await importer(id)).toBe('failed');
+    expect(announced).toBe(3);
+
+    const failed = await owner.get(`/api/originals/${id}`);
+    expect(failed.body.status).toBe('failed');
+    expect(failed.body.error.code).toBe('psd.corrupt');
+    expect(await t.runtime.storage.list(`studios/${studioId}/motifs/`)).toEqual(before);
+    // the original itself is kept, to retry or delete
+    expect(await t.runtime.storage.exists(`studios/${studioId}/originals/${id}/file`)).toBe(true);
   }, 60_000);
 });

@@ -1,10 +1,10 @@
-import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { existsSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
 import { runUnpack } from '../../../server/features/originals/unpack/run-unpack';
 import { UnpackError } from '../../../server/features/originals/unpack/unpack-error';
-import type { UnpackProgress } from '../../../server/features/originals/unpack/unpack-result';
+import type { UnpackedMotif, UnpackProgress } from '../../../server/features/originals/unpack/unpack-result';
 import { layer, solid, writeTestPsd } from './support/ag-psd-files';
 
 // The child process is what stands between a hostile upload and the web or worker process.
@@ -34,6 +34,19 @@ describe('unpacking in a child process', () => {
     expect(progress.at(-1)?.phase).toBe('finishing');
     const percents = progress.map((p) => p.percent);
     expect(percents).toEqual([...percents].sort((a, b) => a - b));
+  }, 30_000);
+
+  it('announces each motif once its PNG and thumbnail are written, before the result', async () => {
+    const outDir = mkdtempSync(join(dir, 'out-'));
+    const announced: { motif: UnpackedMotif; filesThere: boolean }[] = [];
+    let resultArrived = false;
+    const result = await runUnpack({ filePath: small.file, outDir, cut: 'layers' }, undefined, (motif) => {
+      announced.push({ motif, filesThere: !resultArrived && existsSync(join(outDir, motif.pngFile)) && existsSync(join(outDir, motif.thumbFile)) });
+    });
+    resultArrived = true;
+    expect(announced.map((a) => a.motif.name).sort()).toEqual(['Background', 'Kite']);
+    expect(announced.every((a) => a.filesThere)).toBe(true);
+    expect(announced.map((a) => a.motif.contentHash).sort()).toEqual(result.motifs.map((m) => m.contentHash).sort());
   }, 30_000);
 
   it('stops a child that runs past the time limit', async () => {

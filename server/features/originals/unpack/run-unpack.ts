@@ -6,7 +6,7 @@ import { UnpackError, isUnpackErrorCode } from './unpack-error';
 import { resolveUnpackLimits } from './unpack-limits';
 import { childMessageSchema, type UnpackRequest } from './unpack-messages';
 import type { UnpackInput } from './unpack-original';
-import type { UnpackProgress, UnpackResult } from './unpack-result';
+import type { UnpackedMotif, UnpackProgress, UnpackResult } from './unpack-result';
 
 export type { UnpackInput } from './unpack-original';
 
@@ -19,8 +19,13 @@ const CHILD_ENV_KEYS = ['PATH', 'NODE_ENV', 'TMPDIR', 'LANG', 'TZ', 'UV_THREADPO
 
 // Unpacks an uploaded original in a child process (tsx loader, capped V8 heap, resident
 // memory watched, wall-clock limit), so a hostile file can never take the calling process down.
-// Rejects with an UnpackError naming the problem.
-export function runUnpack(input: UnpackInput, onProgress?: (progress: UnpackProgress) => void): Promise<UnpackResult> {
+// Rejects with an UnpackError naming the problem. `onMotif` hears of each motif whose files are
+// written, before the result (which lists every motif again).
+export function runUnpack(
+  input: UnpackInput,
+  onProgress?: (progress: UnpackProgress) => void,
+  onMotif?: (motif: UnpackedMotif) => void,
+): Promise<UnpackResult> {
   const limits = resolveUnpackLimits(input.limits);
   const started = performance.now();
   const child = takeChild(Math.round(limits.maxHeapMb));
@@ -54,12 +59,16 @@ export function runUnpack(input: UnpackInput, onProgress?: (progress: UnpackProg
       stderr = (stderr + chunk.toString('utf8')).slice(-STDERR_KEEP);
     });
     child.on('message', (raw: unknown) => {
+      // nothing after the answer or a stop: a late motif would be stored for an import that ended
+      if (settled) return;
       const parsed = childMessageSchema.safeParse(raw);
       if (!parsed.success) return finish(new UnpackError('unpack.crashed', 'The unpack worker sent a malformed answer'));
       const message = parsed.data;
       if (message.type === 'ready') return;
       if (message.type === 'progress') {
         onProgress?.({ phase: message.phase, percent: message.percent });
+      } else if (message.type === 'motif') {
+        onMotif?.(message.motif);
       } else if (message.type === 'result') {
         const peakRssBytes = Math.max(peakRss, message.result.resources?.peakRssBytes ?? 0);
         const cpuMs = message.result.resources?.cpuMs;

@@ -2,7 +2,7 @@ import { isUnpackError } from './unpack-error';
 import type { ChildMessage, UnpackRequest } from './unpack-messages';
 import { unpackOriginal } from './unpack-original';
 import { warmUpUnpacker } from './unpack-warm-up';
-import type { UnpackProgress } from './unpack-result';
+import type { UnpackedMotif, UnpackProgress } from './unpack-result';
 
 // Entry of the unpack child process (forked by runUnpack): one request, one answer, exit.
 const PROGRESS_INTERVAL_MS = 200;
@@ -30,7 +30,9 @@ async function handle(raw: unknown): Promise<void> {
     void send({ type: 'progress', ...progress });
   };
   try {
-    const result = await unpackOriginal(request.input, onProgress);
+    // each finished motif goes to the parent at once, so it can store it during the next decode
+    const onMotif = (motif: UnpackedMotif) => void send({ type: 'motif', motif });
+    const result = await unpackOriginal(request.input, onProgress, onMotif);
     const cpu = process.cpuUsage(cpuBefore);
     result.resources = {
       peakRssBytes: process.resourceUsage().maxRSS * 1024,

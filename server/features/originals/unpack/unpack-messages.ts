@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { unpackResultSchema } from './unpack-result';
+import { unpackedMotifSchema, unpackResultSchema } from './unpack-result';
 
 // What the parent and the unpack child process say to each other over IPC.
 const limitsSchema = z.object({
@@ -22,6 +22,8 @@ export const unpackRequestSchema = z.object({
 export const childMessageSchema = z.discriminatedUnion('type', [
   z.object({ type: z.literal('ready') }),
   z.object({ type: z.literal('progress'), phase: z.enum(['reading', 'cutting', 'encoding', 'finishing']), percent: z.number() }),
+  // one motif whose PNG and thumbnail are written, ahead of the result (which lists it again)
+  z.object({ type: z.literal('motif'), motif: unpackedMotifSchema }),
   z.object({ type: z.literal('result'), result: unpackResultSchema }),
   z.object({ type: z.literal('error'), code: z.string(), message: z.string() }),
 ]);

@@ -4,7 +4,7 @@ import { unpackFlatImage } from './unpack-flat-image';
 import { UnpackError } from './unpack-error';
 import { resolveUnpackLimits, type UnpackLimits } from './unpack-limits';
 import { unpackPsd } from './unpack-psd';
-import type { UnpackCut, UnpackProgress, UnpackResult } from './unpack-result';
+import type { UnpackCut, UnpackedMotif, UnpackProgress, UnpackResult } from './unpack-result';
 
 export type UnpackInput = {
   filePath: string;
@@ -17,7 +17,12 @@ export type UnpackInput = {
 
 // The unpack itself, in the calling process. The server runs it through runUnpack (a child
 // process with memory and time limits); tests and benches may call it directly.
-export async function unpackOriginal(input: UnpackInput, onProgress?: (progress: UnpackProgress) => void): Promise<UnpackResult> {
+// `onMotif` hears of each motif of a layered file once its files are written.
+export async function unpackOriginal(
+  input: UnpackInput,
+  onProgress?: (progress: UnpackProgress) => void,
+  onMotif?: (motif: UnpackedMotif) => void,
+): Promise<UnpackResult> {
   const limits = resolveUnpackLimits(input.limits);
   const size = await fileSize(input.filePath);
   if (size > limits.maxFileBytes) {
@@ -26,7 +31,7 @@ export async function unpackOriginal(input: UnpackInput, onProgress?: (progress:
   await mkdir(input.outDir, { recursive: true });
   const head = await readHead(input.filePath);
   const type = sniffFileType(head);
-  const ctx = { outDir: input.outDir, cut: input.cut, limits, originalName: input.originalName, onProgress };
+  const ctx = { outDir: input.outDir, cut: input.cut, limits, originalName: input.originalName, onProgress, onMotif };
   switch (type.kind) {
     case 'psd':
     case 'psb':

@@ -22,6 +22,8 @@ export type UnpackContext = {
   limits: UnpackLimits;
   originalName?: string;
   onProgress?: (progress: UnpackProgress) => void;
+  // each motif as soon as its files are written, so they can be stored while the next decodes
+  onMotif?: (motif: UnpackedMotif) => void;
 };
 
 // ag-psd refuses more than 16 channels in the header, though the spec allows 56; the header's
@@ -78,7 +80,7 @@ export async function unpackPsd(file: Buffer, ctx: UnpackContext): Promise<Unpac
       suggestedTags: suggestTags([...plan.path].reverse()),
     };
     const baseName = motifBaseName(motifCount++);
-    await queue.add(() => buildMotif(image, crop, metadata, baseName, settings));
+    await queue.add(() => buildMotif(image, crop, metadata, baseName, settings).then(announce(ctx)));
     progress({ phase: 'cutting', percent: 10 + Math.round((85 * (i + 1)) / plans.length) });
   }
   progress({ phase: 'encoding', percent: 95 });
@@ -123,6 +125,13 @@ async function unpackMergedImage(file: Buffer, header: PsdHeader, ctx: UnpackCon
     motifs,
     report,
     timings: { parseMs: round(parseMs), cutMs: round(cutMs), encodeMs: round(performance.now() - started - parseMs - cutMs) },
+  };
+}
+
+function announce(ctx: Pick<UnpackContext, 'onMotif'>) {
+  return (motif: UnpackedMotif): UnpackedMotif => {
+    ctx.onMotif?.(motif);
+    return motif;
   };
 }
 

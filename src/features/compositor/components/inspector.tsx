@@ -20,7 +20,7 @@ export function Inspector({ editor }: { editor: ProductEditor }) {
   const unit = useEditorSelector(editor, (s) => s.rulerUnit);
   const selection = useEditorSelector(editor, (s) => s.selection);
   return (
-    <aside aria-label="Selection" className="min-h-0 overflow-y-auto border-l border-sand bg-paper p-3 text-sm">
+    <aside aria-label="Selection" className="min-h-0 flex-1 overflow-y-auto border-l border-sand bg-paper p-3 text-sm">
       {selected.length === 0 && <p className="text-ink-soft">Pick a placement on the product to see and change its size, turn and colour.</p>}
       {selected.length === 1 && <SinglePlacement editor={editor} p={selected[0]} unit={unit} />}
       {selected.length > 1 && <SeveralPlacements editor={editor} ids={selection} />}

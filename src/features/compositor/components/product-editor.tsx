@@ -4,6 +4,7 @@ import { addPlacement, type Layout } from '@shared/scene';
 import type { ProductDetail } from '@shared/contracts/products';
 import { isApiRequestError } from '../../../lib/api-client';
 import { Autosaver } from '../autosave';
+import { useSettledRevision } from '../preflight/use-settled-revision';
 import { ProductEditor } from '../editor';
 import { frontCentre, placementForMotif, placementsAsInOriginal, type OriginalMotif, type PlaceableMotif } from '../place-motifs';
 import type { LoadThumb } from '../render/image-cache';
@@ -13,7 +14,10 @@ import { HelpSheet } from './help-sheet';
 import { Inspector } from './inspector';
 import { MotifTray } from './motif-tray';
 import { NewerVersions } from './newer-versions';
+import { PreflightPanel } from './preflight-panel';
 import { SaveStatusBar } from './save-status';
+import { SoftProofNotice, SoftProofToggle, useSoftProofView } from './soft-proof-toggle';
+import { useSaveStatus } from './use-editor-state';
 
 export type ProductEditorProps = {
   product: ProductDetail;
@@ -32,6 +36,10 @@ export function ProductEditorView({ product, save, reload, loadThumb }: ProductE
   const [autosaver] = useState(() => new Autosaver(product.layout, product.revision, save, toFailure));
   const [reloading, setReloading] = useState(false);
   const canvasBox = useRef<HTMLDivElement>(null);
+  const saveStatus = useSaveStatus(autosaver);
+  // the server's checks and the soft proof look at what was saved, so they follow the saved revision
+  const savedRevision = useSettledRevision(saveStatus.revision);
+  const softProof = useSoftProofView(editor, product.id, savedRevision);
 
   useEffect(() => {
     let last = editor.getState().committedLayout;
@@ -88,15 +96,20 @@ export function ProductEditorView({ product, save, reload, loadThumb }: ProductE
     <div className="relative left-1/2 grid h-[calc(100vh-10.5rem)] min-h-[520px] w-[calc(100vw-2rem)] -translate-x-1/2 grid-cols-[14rem_minmax(0,1fr)_17rem] grid-rows-[auto_auto_minmax(0,1fr)] overflow-hidden rounded-lg border border-sand bg-paper">
       <div className="col-span-3 flex flex-wrap items-center justify-between gap-2 border-b border-sand bg-paper px-3 py-2">
         <EditorToolbar editor={editor} screen={screen} />
+        <SoftProofToggle view={softProof} />
         <SaveStatusBar autosaver={autosaver} onReload={onReload} reloading={reloading} />
       </div>
       {/* always present, so the grid's rows stay toolbar / notice / body even with no notice */}
       <div className="col-span-3"><NewerVersions editor={editor} uses={product.motifs} /></div>
       <MotifTray onPlace={(m) => place(m)} onPlaceOriginal={placeOriginal} />
-      <div ref={canvasBox} className="min-h-0">
+      <div ref={canvasBox} className="relative min-h-0">
         <EditorCanvas editor={editor} onDropMotif={place} loadThumb={loadThumb} />
+        {softProof.on && <SoftProofNotice view={softProof} unsaved={saveStatus.kind !== 'saved' || savedRevision !== saveStatus.revision} />}
       </div>
-      <Inspector editor={editor} />
+      <div className="flex min-h-0 flex-col">
+        <Inspector editor={editor} />
+        <PreflightPanel editor={editor} productId={product.id} savedRevision={savedRevision} />
+      </div>
       <HelpSheet editor={editor} />
     </div>
   );

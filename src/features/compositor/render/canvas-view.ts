@@ -1,9 +1,10 @@
 import type { ProductEditor, EditorState } from '../editor';
 import { drawEditorChrome } from './draw-chrome';
 import { drawScene } from './draw-scene';
+import { fontCache } from './font-cache';
 import { MotifImageCache, type LoadThumb } from './image-cache';
 
-type Drawn = { state: EditorState; generation: number; width: number; height: number; dpr: number };
+type Drawn = { state: EditorState; generation: number; fonts: number; width: number; height: number; dpr: number };
 
 /**
  * Ties an editor to a canvas: redraws on the next animation frame, and only when the scene
@@ -20,7 +21,12 @@ export class CanvasView {
 
   constructor(private readonly canvas: HTMLCanvasElement, private readonly editor: ProductEditor, loadThumb?: LoadThumb) {
     this.images = new MotifImageCache(loadThumb, () => this.request());
-    this.unsubscribe = editor.subscribe(() => this.request());
+    const offEditor = editor.subscribe(() => this.request());
+    const offFonts = fontCache.subscribe(() => this.request());
+    this.unsubscribe = () => {
+      offEditor();
+      offFonts();
+    };
   }
 
   resize(width: number, height: number): void {
@@ -52,14 +58,14 @@ export class CanvasView {
     const { width, height } = this.size;
     const l = this.last;
     if (l && l.state.scene.sceneVersion === state.scene.sceneVersion && l.state.viewport === state.viewport && l.state.selection === state.selection &&
-      l.state.overlays === state.overlays && l.state.guides === state.guides && l.state.marquee === state.marquee && l.state.rulerUnit === state.rulerUnit &&
-      l.generation === this.images.generation && l.width === width && l.height === height && l.dpr === dpr) return;
+      l.state.overlays === state.overlays && l.state.guides === state.guides && l.state.marquee === state.marquee && l.state.rulerUnit === state.rulerUnit && l.state.printView === state.printView &&
+      l.generation === this.images.generation && l.fonts === fontCache.generation && l.width === width && l.height === height && l.dpr === dpr) return;
     const ctx = this.canvas.getContext('2d');
     if (!ctx || width === 0 || height === 0) return;
-    drawScene(ctx, state.scene, this.editor.template, this.images, state.viewport, state.overlays, { dpr, geometry: this.editor.geometry, screen: this.size });
+    drawScene(ctx, state.scene, this.editor.template, this.images, state.viewport, state.overlays, { dpr, geometry: this.editor.geometry, screen: this.size, printView: state.printView });
     drawEditorChrome(ctx, state, this.editor.selectionBounds(), this.editor.geometry, this.editor.template.dpi, this.size, dpr);
     this.framesDrawn += 1;
-    this.last = { state, generation: this.images.generation, width, height, dpr };
+    this.last = { state, generation: this.images.generation, fonts: fontCache.generation, width, height, dpr };
   }
 
   dispose(): void {

@@ -4,7 +4,9 @@ import { blankColoursOf, templateGeometry, type Template, type TemplateGeometry 
 import type { OverlaySettings } from '../overlay-settings';
 import { viewportMatrix, type Viewport } from '../viewport';
 import { canvasCompositeFor } from './blend-modes';
-import type { MotifImageCache } from './image-cache';
+import type { MotifBitmap, MotifImageCache } from './image-cache';
+import { textOutlinePath } from '@shared/text/text-layout';
+import { fontCache } from './font-cache';
 import { drawTemplateOverlays } from './overlays';
 
 export type Ctx2D = CanvasRenderingContext2D;
@@ -16,6 +18,8 @@ export type DrawSceneOptions = {
   variantId?: string | null;
   /** CSS px size of the canvas. */
   screen: { width: number; height: number };
+  /** Drawn over the whole print file instead of the artwork (the soft proof: the design as it would print). */
+  printView?: MotifBitmap | null;
 };
 
 // Our own pasteboard: a calm sand grey, so the white blank stands out.
@@ -43,22 +47,24 @@ export function drawScene(ctx: Ctx2D, scene: Scene, template: Template, images: 
   ctx.fillStyle = blankColoursOf(template, options.variantId).body;
   fillRect(ctx, geometry.bleedRect);
 
-  const plan = renderPlan(scene, template, { clip: 'none' });
-  for (const op of plan.ops) {
-    ctx.save();
-    ctx.globalAlpha = op.opacity;
-    ctx.globalCompositeOperation = canvasCompositeFor(op.blendMode);
-    // A pattern stops at the print area even in the editor's unclipped plan, as it will in print.
-    if (op.role === 'tile') {
-      const c = op.clip ?? geometry.printArea;
-      setMatrix(ctx, screenM);
-      ctx.beginPath();
-      ctx.rect(c.x, c.y, c.width, c.height);
-      ctx.clip();
+  if (options.printView) {
+    const b = geometry.bleedRect;
+    setMatrix(ctx, compose(scale(b.width / options.printView.width, b.height / options.printView.height), [1, 0, 0, 1, b.x, b.y], screenM));
+    ctx.imageSmoothingEnabled = true;
+    ctx.imageSmoothingQuality = 'medium';
+    ctx.drawImage(options.printView, 0, 0);
+  } else {
+    const plan = renderPlan(scene, template, { clip: 'none' });
+    // The print file holds the ink alone: a blend mode mixes with the artwork below it, never with
+    // the bare blank. With any blend mode the artwork is drawn on its own transparent layer first,
+    // as the print file is; with only normal ones the result is the same either way, so skip it.
+    const layer = plan.ops.some((op) => op.blendMode !== 'normal') ? artworkLayer(ctx.canvas.width, ctx.canvas.height) : null;
+    const target = layer ?? ctx;
+    for (const op of plan.ops) drawOp(target, op, images, screenM, geometry);
+    if (layer) {
+      ctx.setTransform(1, 0, 0, 1, 0, 0);
+      ctx.drawImage(layer.canvas, 0, 0);
     }
-    if (op.kind === 'motif') drawMotif(ctx, op, images, screenM);
-    else drawText(ctx, op, screenM);
-    ctx.restore();
   }
 
   // Everything outside the print area will not print: veil it rather than hide it.
@@ -72,6 +78,41 @@ export function drawScene(ctx: Ctx2D, scene: Scene, template: Template, images: 
   ctx.fill('nonzero');
 
   drawTemplateOverlays(ctx, geometry, overlays, screenM, viewport.zoom * dpr);
+}
+
+function drawOp(ctx: Ctx2D, op: MotifDrawOp | TextDrawOp, images: MotifImageCache, screenM: Affine, geometry: TemplateGeometry): void {
+  ctx.save();
+  ctx.globalAlpha = op.opacity;
+  ctx.globalCompositeOperation = canvasCompositeFor(op.blendMode);
+  // A pattern stops at the print area even in the editor's unclipped plan, as it will in print.
+  if (op.role === 'tile') {
+    const c = op.clip ?? geometry.printArea;
+    setMatrix(ctx, screenM);
+    ctx.beginPath();
+    ctx.rect(c.x, c.y, c.width, c.height);
+    ctx.clip();
+  }
+  if (op.kind === 'motif') drawMotif(ctx, op, images, screenM);
+  else drawText(ctx, op, screenM);
+  ctx.restore();
+}
+
+// One transparent layer reused from frame to frame (a canvas per frame would churn memory during drags).
+let layerCtx: Ctx2D | null = null;
+
+function artworkLayer(width: number, height: number): Ctx2D | null {
+  if (typeof document === 'undefined') return null;
+  if (!layerCtx) layerCtx = document.createElement('canvas').getContext('2d');
+  if (!layerCtx) return null;
+  const c = layerCtx.canvas;
+  if (c.width !== width || c.height !== height) {
+    c.width = width;
+    c.height = height;
+  } else {
+    layerCtx.setTransform(1, 0, 0, 1, 0, 0);
+    layerCtx.clearRect(0, 0, width, height);
+  }
+  return layerCtx;
 }
 
 function drawMotif(ctx: Ctx2D, op: MotifDrawOp, images: MotifImageCache, screenM: Affine): void {
@@ -91,21 +132,34 @@ function drawMotif(ctx: Ctx2D, op: MotifDrawOp, images: MotifImageCache, screenM
   ctx.drawImage(bitmap, 0, 0);
 }
 
-// Source Sans 3 from @fontsource, loaded by the page; outlines (opentype.js) are a later step.
-export const TEXT_FONT_FAMILY = '"Source Sans 3", sans-serif';
+// Laid-out outlines by text and box: a drag moves the matrix, not the glyphs, so frames reuse them.
+const outlineCache = new Map<string, Path2D>();
 
+function textOutline(op: TextDrawOp): Path2D | null {
+  const stack = fontCache.get(op.fontId);
+  if (!stack || typeof Path2D === 'undefined') return null;
+  const key = [op.fontId, op.sizePx, op.align, op.letterSpacing, op.arcDeg, op.width, op.height, op.content].join('\u0000');
+  let path = outlineCache.get(key);
+  if (!path) {
+    path = new Path2D(textOutlinePath(op, { width: op.width, height: op.height }, stack));
+    if (outlineCache.size > 200) outlineCache.delete(outlineCache.keys().next().value as string);
+    outlineCache.set(key, path);
+  }
+  return path;
+}
+
+// Text from the shipped fonts' glyph outlines, the same path the print file fills (shared/text).
 function drawText(ctx: Ctx2D, op: TextDrawOp, screenM: Affine): void {
   setMatrix(ctx, compose(op.matrix, screenM));
+  const path = textOutline(op);
+  if (!path) {
+    // a faint box of the text's size while its font loads
+    ctx.fillStyle = 'rgba(40, 90, 110, 0.12)';
+    ctx.fillRect(0, 0, op.width, op.height);
+    return;
+  }
   ctx.fillStyle = op.colour;
-  ctx.font = `${op.sizePx}px ${TEXT_FONT_FAMILY}`;
-  ctx.textBaseline = 'middle';
-  ctx.textAlign = op.align === 'centre' ? 'center' : op.align;
-  if ('letterSpacing' in ctx) ctx.letterSpacing = `${(op.letterSpacing / 1000) * op.sizePx}px`;
-  const x = op.align === 'left' ? 0 : op.align === 'right' ? op.width : op.width / 2;
-  const lines = op.content.split('\n');
-  const lineHeight = op.sizePx * 1.2;
-  const top = op.height / 2 - ((lines.length - 1) * lineHeight) / 2;
-  lines.forEach((line, i) => ctx.fillText(line, x, top + i * lineHeight));
+  ctx.fill(path);
 }
 
 export function fillRect(ctx: Ctx2D, r: Rect): void {

@@ -7,6 +7,7 @@ import { ErrorState } from '../../../components/ui/error-state';
 import { PageHeader } from '../../../components/ui/page-header';
 import { LoadingState } from '../../../components/ui/spinner';
 import { useSession } from '../../auth/components/session';
+import { MotifSalesSection } from '../../sales/components/motif-sales-section';
 import { rightsWords } from '../../library/rights-words';
 import { useMotif } from '../api/get-motif';
 import { ColourSwatches } from '../components/colour-swatches';
@@ -94,6 +95,7 @@ export function MotifPage() {
           <Card title="Where it is used" description="Every product placement of this motif, with the version it uses.">
             <UsageTable usage={data.usage} currentVersion={data.version} />
           </Card>
+          <MotifSalesSection motifId={data.id} />
           <Card title="Versions" description="Earlier versions stay readable; products keep theirs until updated.">
             <VersionsPanel key={data.versions.length} motif={data} canEdit={canEdit} />
           </Card>

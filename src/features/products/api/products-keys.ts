@@ -3,5 +3,7 @@ export const productsKeys = {
   all: ['products'] as const,
   lists: () => [...productsKeys.all, 'list'] as const,
   detail: (id: string) => [...productsKeys.all, 'detail', id] as const,
+  stages: (id: string) => [...productsKeys.all, 'detail', id, 'stages'] as const,
+  variants: (id: string) => [...productsKeys.all, 'detail', id, 'variants'] as const,
   templates: () => [...productsKeys.all, 'templates'] as const,
 };

@@ -2,6 +2,7 @@ import { useCallback } from 'react';
 import { useParams } from 'react-router-dom';
 import { useQueryClient } from '@tanstack/react-query';
 import type { Layout } from '@shared/scene';
+import { ButtonLink } from '../../../components/ui/button';
 import { ErrorState } from '../../../components/ui/error-state';
 import { LoadingState } from '../../../components/ui/spinner';
 import { PageHeader } from '../../../components/ui/page-header';
@@ -33,7 +34,15 @@ export function ProductEditorPage() {
   const p = product.data;
   return (
     <div>
-      <PageHeader title={p.name} actions={<span className="text-sm text-ink-soft">{`${p.templateName} · ${p.stage}`}</span>} />
+      <PageHeader
+        title={p.name}
+        actions={
+          <span className="flex flex-wrap items-center gap-3">
+            <span className="text-sm text-ink-soft">{`${p.templateName} · ${p.stage}`}</span>
+            <ButtonLink variant="secondary" size="sm" to={`/products/${p.id}`}>The product’s page</ButtonLink>
+          </span>
+        }
+      />
       {/* keyed by id, so moving to another product starts a fresh editor and autosave */}
       <ProductEditorView key={p.id} product={p} save={save} reload={reload} />
     </div>

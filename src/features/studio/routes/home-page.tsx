@@ -4,6 +4,7 @@ import { PageHeader } from '../../../components/ui/page-header';
 import { roleNames, roleSummaries } from '../../auth/components/role-words';
 import { useSession } from '../../auth/components/session';
 import { firstName } from '../../../lib/format';
+import { NeedsAttentionCard } from '../../calendar/components/needs-attention-card';
 import { NextSteps } from '../components/next-steps';
 import { RoleAbilities } from '../components/role-abilities';
 
@@ -40,6 +41,7 @@ export function HomePage() {
           </h2>
           <NextSteps role={me.role} />
         </section>
+        <NeedsAttentionCard />
         <Card title={`Your role: ${roleNames[me.role]}`} description={roleSummaries[me.role]}>
           <RoleAbilities role={me.role} />
         </Card>

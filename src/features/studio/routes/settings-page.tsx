@@ -9,6 +9,7 @@ import { useSession } from '../../auth/components/session';
 import { useStudio } from '../api/get-studio';
 import { SettingsForm } from '../components/settings-form';
 import { SettingsSummary } from '../components/settings-summary';
+import { StudioDataCard } from '../components/studio-data-card';
 
 export function SettingsPage() {
   const me = useSession();
@@ -61,6 +62,11 @@ export function SettingsPage() {
           <SettingsSummary settings={studio.data} />
         )}
       </Card>
+      {can(me.role, 'studio.data') && (
+        <div className="mt-6">
+          <StudioDataCard />
+        </div>
+      )}
     </>
   );
 }

@@ -1,0 +1,1 @@
+ALTER TABLE "sales_imports" ADD COLUMN "report" jsonb DEFAULT '{}'::jsonb NOT NULL;

@@ -1,0 +1,29 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { apiRequest } from '../../../lib/api-client';
+import type { MutationConfig } from '../../../lib/query-client';
+import { productsKeys } from '../../products/api/products-keys';
+import { sampleKeys } from './sample-keys';
+
+export function deleteSample({ id }: { id: string; productId: string }) {
+  return apiRequest(`/samples/${encodeURIComponent(id)}`, { method: 'DELETE' });
+}
+
+export function useDeleteSample({ mutationConfig }: { mutationConfig?: MutationConfig<typeof deleteSample> } = {}) {
+  const queryClient = useQueryClient();
+  const { onSuccess, ...restConfig } = mutationConfig ?? {};
+  return useMutation({
+    ...restConfig,
+    mutationFn: deleteSample,
+    onSuccess: (...args) => {
+      // The latest sample decides the product's way to ready: its page and the product lists show it.
+      const { productId } = args[1];
+      const refreshed = Promise.all([
+        queryClient.invalidateQueries({ queryKey: sampleKeys.forProduct(productId) }),
+        queryClient.invalidateQueries({ queryKey: productsKeys.detail(productId) }),
+        queryClient.invalidateQueries({ queryKey: productsKeys.lists() }),
+      ]);
+      onSuccess?.(...args);
+      return refreshed;
+    },
+  });
+}
