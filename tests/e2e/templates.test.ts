@@ -23,6 +23,8 @@ afterAll(async () => {
   await browser?.close();
 });
 
+const diagramGuideHref = () => page.locator('figure svg image').first().getAttribute('href');
+
 describe('a studio template from the printer\'s figures', () => {
   it('starts from a built-in mug, redraws the diagram as figures change, saves and takes a guide image', async () => {
     await page.goto(`${appUrl}/templates`);
@@ -37,6 +39,7 @@ describe('a studio template from the printer\'s figures', () => {
     await page.getByLabel('Trim width (in)').fill('8.5');
     await page.getByLabel('Bleed on each side (in)').fill('0');
     await expect.poll(() => diagram.textContent()).toContain('2550 px');
+    expect(await diagram.textContent()).toContain('8.5 in trim');
     // a figure that cannot work is named at the field, and the diagram keeps the last good one
     await page.getByLabel('Resolution (DPI)').fill('');
     await page.getByLabel('Resolution (DPI)').blur();
@@ -54,6 +57,12 @@ describe('a studio template from the printer\'s figures', () => {
     await (await chooser).setFiles({ name: 'harbour-press-guide.png', mimeType: 'image/png', buffer: guide });
     await page.getByRole('img', { name: "The printer's guide image" }).waitFor();
     await page.getByText("Printer's guide (not printed)").waitFor();
+    // the diagram lays the guide over the whole print file, served by the API as WebP
+    const href = await diagramGuideHref();
+    expect(href).toMatch(/^\/api\/templates\/[0-9a-f-]{36}\/guide-image\?v=/);
+    const served = await page.request.get(`${appUrl}${href}`);
+    expect(served.status()).toBe(200);
+    expect(served.headers()['content-type']).toBe('image/webp');
     await browser.screenshot(page, 'template-with-guide');
 
     await page.goto(`${appUrl}/templates`);
