@@ -9,7 +9,7 @@ import { mug11oz, templateGeometry } from '../../shared/templates';
 import { WRAP_VIEWS } from '../../shared/wrap';
 import type { SourcePixels } from '../../server/lib/image/affine-sample';
 import { renderMugPreview } from '../../server/lib/image/mug-preview';
-import { encodePrintFile } from '../../server/lib/image/print-file-encode';
+import { encodePrintFile, PRINT_PNG_OPTIONS } from '../../server/lib/image/print-file-encode';
 import { motifLayer, renderPrintFile } from '../../server/lib/image/print-render';
 
 export type PrintBenchResult = {
@@ -90,7 +90,8 @@ export async function benchPrint(runs = 3): Promise<PrintBenchResult> {
     sharp({ create: { width: plan.size.width, height: plan.size.height, channels: 4, background: { r: 0, g: 0, b: 0, alpha: 0 } } })
       .composite(layers.flatMap((l, i) => (l ? [{ input: Buffer.from(l.data.buffer), raw: { width: l.width, height: l.height, channels: 4 as const }, left: l.left, top: l.top, blend: sharpBlend[plan.ops[i].blendMode] }] : [])))
       .withDensity(300)
-      .png({ compressionLevel: 6, adaptiveFiltering: false })
+      // the same PNG settings as the print file, so the ratio compares rendering, not zlib levels
+      .png(PRINT_PNG_OPTIONS)
       .toBuffer(),
   );
 

@@ -1,6 +1,7 @@
 // `npm run bench`: every speed and memory target, each printed against a peer measured in the
 // same run on this machine. Starts its own throwaway Postgres, fake S3 and fake mail.
 import { startTestServices } from '../../tests/setup/test-services';
+import { benchCompositorDrag } from './compositor-drag-bench';
 import { benchUnpack } from './import-bench';
 import { benchImportEndToEnd } from './import-end-to-end';
 import { benchLibrary } from './library-bench';
@@ -31,6 +32,10 @@ try {
   if (wanted('print')) {
     console.log('\n== Print file against sharp composite() of the same layers ==');
     await benchPrint();
+  }
+  if (wanted('compositor')) {
+    console.log('\n== Editor: dragging a placement among 60 in headless Chromium against the idle frame clock ==');
+    await benchCompositorDrag();
   }
   if (wanted('sales')) {
     console.log('\n== Sales import: 50,000 rows through the service against csv-parse alone and Postgres COPY ==');

@@ -12,26 +12,43 @@ export type JobQueue = {
   stop(): Promise<void>;
 };
 
+// Two processes starting at once (a server and a worker, or two test files) may both create
+// the same queue: Postgres then answers one of them with a deadlock or a duplicate. The
+// creation is idempotent, so it is simply tried again.
+const transientCodes = new Set(['40P01', '40001', '23505']);
+
+export async function retryTransient<T>(work: () => Promise<T>, attempts = 5): Promise<T> {
+  for (let attempt = 1; ; attempt++) {
+    try {
+      return await work();
+    } catch (err) {
+      const code = (err as { code?: string }).code;
+      if (attempt >= attempts || !code || !transientCodes.has(code)) throw err;
+      await new Promise((resolve) => setTimeout(resolve, 50 * attempt + Math.random() * 50));
+    }
+  }
+}
+
 // Postgres is the queue: jobs survive restarts and any number of worker processes share it.
 export async function startQueue(databaseUrl: string): Promise<JobQueue> {
   const boss = new PgBoss({ connectionString: databaseUrl, max: 4 });
   boss.on('error', (err) => console.error('[queue]', err.message));
   await boss.start();
-  await boss.createQueue(queueNames.importOriginal, {
+  await retryTransient(() => boss.createQueue(queueNames.importOriginal, {
     name: queueNames.importOriginal,
     // A worker killed mid-import leaves the job active; it expires and is retried from the stored file.
     retryLimit: 3,
     retryDelay: 5,
     retryBackoff: true,
     expireInSeconds: 15 * 60,
-  });
-  await boss.createQueue(queueNames.exportProduct, {
+  }));
+  await retryTransient(() => boss.createQueue(queueNames.exportProduct, {
     name: queueNames.exportProduct,
     // An export renders again from the product and its motifs, so a retry is always safe.
     retryLimit: 2,
     retryDelay: 5,
     expireInSeconds: 15 * 60,
-  });
+  }));
   return {
     boss,
     async enqueueExport(exportId) {

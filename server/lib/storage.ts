@@ -15,7 +15,8 @@ import type { AppConfig } from '../config';
 export type StoredObject = { body: Readable; contentType?: string; contentLength?: number };
 
 export type ObjectStorage = {
-  put(key: string, body: Buffer | Readable, contentType: string): Promise<void>;
+  /** A stream whose length is known (a file on disk) may pass it: small enough, it goes up in one request. */
+  put(key: string, body: Buffer | Readable, contentType: string, options?: { contentLength?: number }): Promise<void>;
   get(key: string): Promise<StoredObject>;
   getBuffer(key: string): Promise<Buffer>;
   exists(key: string): Promise<boolean>;
@@ -37,11 +38,20 @@ export function createS3Client(config: Pick<AppConfig, 'S3_ENDPOINT' | 'S3_REGIO
   });
 }
 
+// Above this a known-length stream still goes up in parts, so one failed part is retried alone.
+const singlePutLimit = 64 * 1024 * 1024;
+
 export function createStorage(client: S3Client, bucket: string): ObjectStorage {
   return {
-    async put(key, body, contentType) {
+    async put(key, body, contentType, options) {
       if (Buffer.isBuffer(body)) {
         await client.send(new PutObjectCommand({ Bucket: bucket, Key: key, Body: body, ContentType: contentType }));
+        return;
+      }
+      const length = options?.contentLength;
+      if (length !== undefined && length <= singlePutLimit) {
+        // One streamed request instead of a multipart upload's three or more round trips.
+        await client.send(new PutObjectCommand({ Bucket: bucket, Key: key, Body: body, ContentType: contentType, ContentLength: length }));
         return;
       }
       // Streams of unknown length go up in parts, never held whole in memory.

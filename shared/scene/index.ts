@@ -15,3 +15,4 @@ export * from './repeat-tiles';
 export * from './render-plan';
 export * from './effective-ppi';
 export * from './history';
+export * from './snap-scale';

@@ -69,7 +69,8 @@ export function snapMove(candidate: Rect, targets: SnapTargets, thresholdPx: num
   return { dx, dy, guides };
 }
 
-const EPS = 1e-6;
+export const SNAP_EPS = 1e-6;
+const EPS = SNAP_EPS;
 
 function nearestShift(values: number[], lines: SnapLine[], threshold: number): number {
   let best = 0;
@@ -84,7 +85,7 @@ function nearestShift(values: number[], lines: SnapLine[], threshold: number): n
 }
 
 /** Every line the (shifted) box now touches, drawn across both the box and the target. */
-function guidesFor(axis: 'x' | 'y', values: number[], lines: SnapLine[], from: number, to: number): SnapGuide[] {
+export function guidesFor(axis: 'x' | 'y', values: number[], lines: SnapLine[], from: number, to: number): SnapGuide[] {
   return lines
     .filter((l) => values.some((v) => Math.abs(l.position - v) < EPS))
     .map((l) => ({ axis, position: l.position, kind: l.kind, ...(l.placementId ? { placementId: l.placementId } : {}), from: Math.min(from, l.from), to: Math.max(to, l.to) }));

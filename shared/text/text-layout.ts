@@ -69,8 +69,8 @@ export function measureText(style: TextStyle, stack: FontStack): LaidOutText {
   return { lines, width, height, missing };
 }
 
-// A bent line is narrower than its straight length: the chord of the arc.
-function arcWidth(width: number, arcDeg: number): number {
+/** A bent line is narrower than its straight length: the chord of the arc (a full diameter past half a turn). */
+export function arcWidth(width: number, arcDeg: number): number {
   const angle = Math.abs(radians(arcDeg));
   if (angle < 1e-6) return width;
   const r = width / angle;

@@ -27,10 +27,15 @@ afterAll(async () => {
 });
 
 const heading = (name: string | RegExp) => page.getByRole('heading', { level: 1, name });
-const mainNav = () => page.getByRole('navigation', { name: 'Main' });
+
+// Members and settings sit in the account menu, beside the studio's name.
+async function openFromAccountMenu(item: string): Promise<void> {
+  await page.getByRole('button', { name: /^Your account:/ }).click();
+  await page.getByRole('menuitem', { name: item, exact: true }).click();
+}
 
 async function openMembers(): Promise<void> {
-  await mainNav().getByRole('link', { name: 'Members' }).click();
+  await openFromAccountMenu('Members');
   await heading('Members').waitFor();
   await page.getByRole('table').waitFor();
 }
@@ -141,7 +146,7 @@ describe('the demo reviewer', () => {
   });
 
   it('sees the studio settings read-only', async () => {
-    await mainNav().getByRole('link', { name: 'Settings' }).click();
+    await openFromAccountMenu('Studio settings');
     await heading('Settings').waitFor();
     await page.getByText('Only owners change these settings.').waitFor();
     const studioNameValue = page.locator('dt', { hasText: 'Studio name' }).locator('xpath=following-sibling::dd');

@@ -6,8 +6,10 @@ import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { exportStatusSchema } from '../../shared/contracts/exports';
 import { motifListResponseSchema } from '../../shared/contracts/motifs';
 import { productDetailSchema } from '../../shared/contracts/products';
-import { createMotifPlacement, type Layout, type MotifPlacement, type MotifPlacementInit } from '../../shared/scene';
-import { blankColoursOf, templatePixelSize } from '../../shared/templates';
+import { createMotifPlacement, createTextPlacement, type Layout, type MotifPlacement, type MotifPlacementInit, type TextPlacement } from '../../shared/scene';
+import { blankColoursOf, pointsToPixels, templatePixelSize } from '../../shared/templates';
+import { loadTestFontStack } from '../../shared/text/test-fonts';
+import { measureText } from '../../shared/text/text-layout';
 import { openBrowser, screenshotDir, type OpenBrowser } from './support/browser';
 import { bundleParityRenderer } from './support/parity-bundle';
 import type { ParityRenderInput } from './support/parity-renderer-entry';
@@ -66,7 +68,7 @@ async function serverPrintFile(productId: string): Promise<Buffer> {
 
 describe('the editor’s canvas and the server’s print file', () => {
   // the export job renders in the server's process, slow on a shared 2-core machine
-  it('agree on a mug wrap of Puffin Picnic motifs with recolour, opacity, blend modes, turns and flips', async () => {
+  it('agree on a mug wrap of Puffin Picnic motifs with recolour, opacity, blend modes, turns, flips and text', async () => {
     const list = motifListResponseSchema.parse(await (await api.get(`${appUrl}/api/motifs?limit=500`)).json());
     const byName = (name: string) => {
       const m = list.motifs.find((x) => x.name === name && /puffin/i.test(x.originalName));
@@ -84,6 +86,12 @@ describe('the editor’s canvas and the server’s print file', () => {
       n += 1;
       return createMotifPlacement({ id: `parity-${n}`, motifId: m.id, version: m.version, naturalWidth: m.width, naturalHeight: m.height, x: W / 2, y: H / 2, ...init });
     };
+    // Text as the editor places it: its box measured from the shipped font's outlines at print size.
+    const text = (id: string, fontId: string, content: string, sizePt: number, init: { x: number; y: number; colour: string; arcDeg?: number; rotationDeg?: number; opacity?: number; blendMode?: MotifPlacementInit['blendMode'] }): TextPlacement => {
+      const style = { content, sizePx: pointsToPixels(sizePt, template.dpi), align: 'centre' as const, letterSpacing: 0, arcDeg: init.arcDeg ?? 0 };
+      const box = measureText(style, loadTestFontStack(fontId));
+      return createTextPlacement({ id, fontId, content, sizePt, align: 'centre', boxWidth: box.width, boxHeight: box.height, ...init });
+    };
     const bg = byName('Background');
     const placements = [
       // an opaque field over the left two thirds; the right third stays bare blank
@@ -98,6 +106,9 @@ describe('the editor’s canvas and the server’s print file', () => {
       place('Clouds', { x: W * 0.55, y: H * 0.2, scale: 0.9, blendMode: 'soft light', flipX: true }),
       // a blend mode over the bare blank: the print file holds the ink alone, nothing to blend with
       place('Kite', { x: W * 0.9, y: H * 0.45, scale: 0.7, rotationDeg: -12, flipX: true, blendMode: 'overlay' }),
+      // straight bold sans over the artwork, and a display serif bent on an arc, turned, half over the bare blank
+      text('parity-title', 'source-sans-3-700', 'Puffin Picnic', 48, { x: W * 0.3, y: H * 0.12, colour: '#1f2024' }),
+      text('parity-arc', 'fraunces', 'Coastal Spring', 40, { x: W * 0.68, y: H * 0.82, colour: '#6a4c93', arcDeg: 50, rotationDeg: -6, opacity: 0.9 }),
     ];
     const layout: Layout = { ...created.layout, placements, mirror: false };
     await send('patch', `/api/products/${created.id}`, { revision: created.revision, layout });
@@ -110,6 +121,7 @@ describe('the editor’s canvas and the server’s print file', () => {
 
     const motifPngs: Record<string, string> = {};
     for (const p of placements) {
+      if (p.type === 'text') continue;
       const key = `${p.motifId}@${p.version}`;
       if (motifPngs[key]) continue;
       const png = await (await api.get(`${appUrl}/api/motifs/${p.motifId}/image?size=full&version=${p.version}`)).body();
@@ -131,6 +143,20 @@ describe('the editor’s canvas and the server’s print file', () => {
     // sanity: the layout really drew (not two blank strips agreeing)
     const inked = client.data.reduce((acc, v, i) => (i % 3 === 0 && v < 200 ? acc + 1 : acc), 0);
     expect(inked / (W * H)).toBeGreaterThan(0.2);
+    // and the text really drew on both sides: inside the arc's box on the bare blank, the purple ink
+    const arc = placements.find((p) => p.id === 'parity-arc') as TextPlacement;
+    const purpleIn = (data: Buffer) => {
+      let n = 0;
+      for (let y = Math.round(arc.y - arc.boxHeight / 2); y < arc.y + arc.boxHeight / 2; y++) {
+        for (let x = Math.round(arc.x - arc.boxWidth / 2); x < arc.x + arc.boxWidth / 2; x++) {
+          const i = (y * W + x) * 3;
+          if (data[i + 2] > data[i + 1] + 40 && data[i] > data[i + 1] + 10) n++;
+        }
+      }
+      return n;
+    };
+    expect(purpleIn(client.data)).toBeGreaterThan(2000);
+    expect(purpleIn(server.data)).toBeGreaterThan(2000);
     expect(stats.mean).toBeLessThan(1);
     expect(stats.p99).toBeLessThan(5);
   }, 150_000);

@@ -71,8 +71,14 @@ describe('a product through its stages', () => {
     // and by pointer: drag the card into the next column
     const card = page.getByRole('list', { name: /^Ready:/ }).getByRole('listitem').filter({ hasText: name });
     await card.dragTo(page.locator('section[aria-labelledby="board-listed"]'));
-    await page.getByRole('dialog').getByRole('button', { name: 'Move to Listed' }).click();
-    await page.getByRole('list', { name: /^Listed:/ }).getByText(name).waitFor();
+    const moveDialog = page.getByRole('dialog');
+    await moveDialog.getByRole('button', { name: 'Move to Listed' }).click();
+    // The dialog closes once the move is saved and the board refetched; if the server refused,
+    // its message is what this check prints.
+    await expect
+      .poll(async () => ((await moveDialog.count()) === 0 ? 'closed' : await moveDialog.innerText()), { timeout: 30_000 })
+      .toBe('closed');
+    await page.getByRole('list', { name: /^Listed:/ }).getByText(name).waitFor({ timeout: 30_000 });
 
     await page.getByRole('link', { name }).click();
     const history = page.getByRole('list', { name: 'Stage history, oldest first' });

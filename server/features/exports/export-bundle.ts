@@ -3,13 +3,17 @@ import { PassThrough } from 'node:stream';
 import type { PreflightReport } from '../../../shared/preflight';
 import type { Template } from '../../../shared/templates';
 import type { MotifVersionRecord } from './exports.repository';
+import type { ManifestVariant } from './variant-print-files';
 
 export type BundleEntry = { name: string; data: Buffer | Uint8Array | string };
 
 export type Manifest = {
   product: { id: string; name: string; revision: number };
   template: Template;
-  printFiles: { name: string; width: number; height: number; dpi: number; variants: string[] }[];
+  /** Each print file with the variants (SKU, or id without one) it is printed for. */
+  printFiles: { name: string; width: number; height: number; dpi: number; variants: string[]; sameDesignForAllVariants: boolean }[];
+  /** Every product variant: its SKU, the print file to print, its previews and its blank. */
+  variants: ManifestVariant[];
   motifs: { motifId: string; name: string; version: number; width: number; height: number; rights: { status: string; source: string; licence: string } }[];
   preflight: PreflightReport;
   /** What the renderer could not draw (e.g. text placements), so nobody is surprised at the press. */

@@ -6,8 +6,9 @@ import { cautionsText } from './cautions';
 import { manifestMotifs, zipBundle, type BundleEntry, type Manifest } from './export-bundle';
 import type { ExportRow, ExportsRepository } from './exports.repository';
 import { productPreflight } from './product-preflight';
-import { productPreview, previewViewsOf } from './product-previews';
+import { previewOnBlank, previewViewsOf } from './product-previews';
 import { missingMotifs, productSources, renderProduct, versionKey, type SourceDeps } from './product-sources';
+import { manifestVariants, previewBlanks, variantsCsv } from './variant-print-files';
 
 export type ExportRunnerDeps = SourceDeps & { repo: ExportsRepository; storage: Pick<ObjectStorage, 'getBuffer' | 'put'> };
 
@@ -53,12 +54,15 @@ export function createExportRunner(deps: ExportRunnerDeps) {
     if (bundle) {
       const entries: BundleEntry[] = [{ name: printName, data: encoded.buffer }];
       await progress(0.45);
-      const variants = sources.template.variants.length ? sources.template.variants.map((v) => v.id) : [null];
-      for (const variant of variants) {
+      // Previews per product variant (its blank and handle colours), or per template blank without variants.
+      const variants = await deps.repo.productVariants(row.studioId, row.productId);
+      for (const target of previewBlanks(sources.template, variants)) {
         for (const view of previewViewsOf(sources.template)) {
-          entries.push({ name: `previews/${variant ?? 'blank'}/${view}.png`, data: await productPreview(render.image, sources.template, view, variant) });
+          entries.push({ name: `previews/${target.folder}/${view}.png`, data: await previewOnBlank(render.image, sources.template, view, target.blank, target.templateVariantId) });
         }
       }
+      const variantRows = manifestVariants(sources.template, variants, printName);
+      if (variantRows.length) entries.push({ name: 'variants.csv', data: variantsCsv(variantRows) });
       await progress(0.65);
       const proofPng = encoded.contentType === 'image/png' ? encoded.buffer : (await encodePrintFile(render.image, { ...sources.template.output, format: 'png', transparency: 'keep' })).buffer;
       entries.push({ name: `proof-sheet-${row.paper}.pdf`, data: await buildProofSheet({ png: proofPng, template: sources.template, productName: sources.product.name, paper: row.paper }) });
@@ -69,8 +73,13 @@ export function createExportRunner(deps: ExportRunnerDeps) {
       const manifest: Manifest = {
         product: { id: sources.product.id, name: sources.product.name, revision: sources.product.revision },
         template: sources.template,
-        // Variants differ only in the blank's colours, so one print file serves them all.
-        printFiles: [{ name: printName, width: render.image.width, height: render.image.height, dpi: sources.template.output.dpi, variants: sources.template.variants.map((v) => v.id) }],
+        // Variants differ only in the blank, never in the layout: one print file serves them all.
+        printFiles: [{
+          name: printName, width: render.image.width, height: render.image.height, dpi: sources.template.output.dpi,
+          variants: variantRows.map((v) => v.sku ?? v.id),
+          sameDesignForAllVariants: true,
+        }],
+        variants: variantRows,
         motifs: manifestMotifs(sources.versions.values(), used),
         preflight: preflight.report,
         renderNotes: render.notes,

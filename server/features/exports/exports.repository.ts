@@ -1,6 +1,7 @@
-import { and, eq, inArray } from 'drizzle-orm';
+import { and, asc, eq, inArray } from 'drizzle-orm';
+import type { VariantOptions } from '../../../shared/contracts/variants';
 import type { Database } from '../../db/client';
-import { motifs, motifVersions, productExports, type ExportError, type ExportFile, type ExportKind, type ExportStatus } from '../../db/schema/index';
+import { motifs, motifVersions, productExports, productVariants, type ExportError, type ExportFile, type ExportKind, type ExportStatus } from '../../db/schema/index';
 
 export type ExportRow = typeof productExports.$inferSelect;
 
@@ -44,6 +45,15 @@ export function createExportsRepository(db: Database) {
         .from(motifVersions)
         .innerJoin(motifs, eq(motifs.id, motifVersions.motifId))
         .where(and(eq(motifVersions.studioId, studioId), eq(motifs.studioId, studioId), inArray(motifVersions.motifId, motifIds)));
+    },
+    /** The product's variants in their shop order, for the bundle's per-variant previews and manifest. */
+    async productVariants(studioId: string, productId: string) {
+      const rows = await db
+        .select({ id: productVariants.id, name: productVariants.name, sku: productVariants.sku, options: productVariants.options })
+        .from(productVariants)
+        .where(and(eq(productVariants.studioId, studioId), eq(productVariants.productId, productId)))
+        .orderBy(asc(productVariants.position), asc(productVariants.createdAt));
+      return rows.map((r) => ({ ...r, options: r.options as VariantOptions }));
     },
   };
 }

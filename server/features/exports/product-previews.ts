@@ -1,5 +1,5 @@
 import type { PreviewView } from '../../../shared/contracts/exports';
-import { blankColoursOf, type Template } from '../../../shared/templates';
+import { blankColoursOf, type BlankColours, type Template } from '../../../shared/templates';
 import { WRAP_VIEWS } from '../../../shared/wrap';
 import { renderFlatPreview, renderMugPreview } from '../../lib/image/mug-preview';
 import type { RgbaImage } from '../../lib/image/rgba-image';
@@ -26,7 +26,11 @@ export function assertPreviewable(template: Template, view: PreviewView, variant
 
 export async function productPreview(print: RgbaImage, template: Template, view: PreviewView, variantId: string | null): Promise<Buffer> {
   assertPreviewable(template, view, variantId);
-  const blank = blankColoursOf(template, variantId);
+  return previewOnBlank(print, template, view, blankColoursOf(template, variantId), variantId);
+}
+
+/** A preview on given blank colours (a product variant's); `templateVariantId` is the template blank they start from. */
+export async function previewOnBlank(print: RgbaImage, template: Template, view: PreviewView, blank: BlankColours, templateVariantId: string | null): Promise<Buffer> {
   if (view === 'flat') return renderFlatPreview(print, template, blank);
-  return renderMugPreview(print, template, view, blank, { printHidden: isColdHeatChanging(variantId) });
+  return renderMugPreview(print, template, view, blank, { printHidden: isColdHeatChanging(templateVariantId) });
 }

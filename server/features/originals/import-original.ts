@@ -44,13 +44,9 @@ type Deps = {
 
 export type ImportOutcome = 'imported' | 'skipped' | 'failed';
 
-// Unpack shares 0–80 %, storing 80–95 %, the commit the rest.
-const unpackWeight: Record<UnpackProgress['phase'], [number, number]> = {
-  reading: [0, 20],
-  cutting: [20, 40],
-  encoding: [40, 78],
-  finishing: [78, 80],
-};
+// The unpacker reports its own 0–100 across its phases (reading, cutting while encodes run,
+// finishing); that is the first 80 % of the whole import, storing 80–95 %, the commit the rest.
+const UNPACK_SHARE = 80;
 
 function throttled(fn: (phase: UnpackProgress['phase'], percent: number) => void, ms = 250) {
   let last = 0;
@@ -121,8 +117,7 @@ export function createOriginalImporter({ db, repo, storage, runUnpack, tmpRoot, 
     const outDir = path.join(workDir, 'out');
     const claimMs = lap();
     const progress = throttled((phase, percent) => {
-      const [from, to] = unpackWeight[phase];
-      void repo.setProgress(originalId, phase, from + ((to - from) * percent) / 100).catch(() => {});
+      void repo.setProgress(originalId, phase, (UNPACK_SHARE * Math.min(100, Math.max(0, percent))) / 100).catch(() => {});
     });
     const uploads = createMotifUploads({
       storage, studioId: original.studioId, outDir, concurrency: UPLOAD_CONCURRENCY,

@@ -1,7 +1,7 @@
 import { createHash, randomUUID } from 'node:crypto';
 import { createReadStream } from 'node:fs';
 import { open, rm } from 'node:fs/promises';
-import { PassThrough } from 'node:stream';
+import { Transform } from 'node:stream';
 import type { OriginalDetail, OriginalSummary } from '../../../shared/contracts/originals';
 import { conflict, HttpError, notFound } from '../../lib/http-error';
 import type { ObjectStorage } from '../../lib/storage';
@@ -99,11 +99,19 @@ export function createOriginalsService({ repo, storage, queue, cleanup }: Deps) 
         const id = randomUUID();
         const key = originalFileKey(input.studioId, id);
         const hash = createHash('sha256');
-        const body = new PassThrough();
-        body.on('data', (chunk: Buffer) => hash.update(chunk));
-        const uploaded = storage.put(key, body, 'application/octet-stream');
-        createReadStream(input.filePath).pipe(body);
-        await uploaded;
+        // Hashed as the bytes go up; a transform only passes data on as the upload reads it, so
+        // no chunk flows past before the request is ready for it.
+        const source = createReadStream(input.filePath);
+        const body = source.pipe(
+          new Transform({
+            transform(chunk: Buffer, _encoding, done) {
+              hash.update(chunk);
+              done(null, chunk);
+            },
+          }),
+        );
+        source.on('error', (err) => body.destroy(err));
+        await storage.put(key, body, 'application/octet-stream', { contentLength: input.byteSize });
         const row = await repo.insert({
           id,
           studioId: input.studioId,

@@ -197,7 +197,7 @@ export function createSamplesService({ repo, storage, maxPixels, photoLimitBytes
         const keys = samplePhotoKeys(input.studioId, input.sampleId, id);
         try {
           // The photo goes up byte for byte as sent; only the two smaller copies are re-encoded.
-          await storage.put(keys.original, createReadStream(input.filePath), prepared.contentType);
+          await storage.put(keys.original, createReadStream(input.filePath), prepared.contentType, { contentLength: input.byteSize });
           await storage.put(keys.display, prepared.display, 'image/webp');
           await storage.put(keys.thumb, prepared.thumb, 'image/webp');
           const row = await repo.insertPhoto({

@@ -23,37 +23,51 @@ export function transformedBox(matrix: Affine, width: number, height: number, li
  * are written. The result is straight RGBA, ready for compositeOnto.
  */
 export function drawTransformed(source: SourcePixels, matrix: Affine, clip: Rect): RgbaImage | null {
-  const inverse = invert(matrix);
-  if (!inverse) return null;
   const box = transformedBox(matrix, source.width, source.height, clip);
-  if (!box) return null;
+  if (!box || !invert(matrix)) return null;
   const width = box.right - box.left;
-  const height = box.bottom - box.top;
-  const out = new Uint8Array(width * height * 4);
+  const out = new Uint8Array(width * (box.bottom - box.top) * 4);
+  sampleRows(source, matrix, box, (y, row, from, to) => out.set(row.subarray(from * 4, to * 4), ((y - box.top) * width + from) * 4));
+  return { data: out, width, height: box.bottom - box.top, left: box.left, top: box.top };
+}
+
+/**
+ * The same samples, one template row at a time into a reused buffer (straight RGBA, zero where
+ * the source does not reach), so a caller can composite each row at once without holding the
+ * whole transformed layer. Only columns [from, to) of a row are valid (zero where the sample is transparent).
+ */
+export function sampleRows(source: SourcePixels, matrix: Affine, box: PixelBoxLike, onRow: (y: number, row: Uint8Array, from: number, to: number) => void): void {
+  const inverse = invert(matrix);
+  if (!inverse) return;
+  const width = box.right - box.left;
+  const out = new Uint8Array(width * 4);
   const [ia, ib, ic, id, ie, iff] = inverse;
   const src = source.data;
   const sw = source.width;
   const sh = source.height;
-  for (let y = 0; y < height; y++) {
-    const ty = box.top + y + 0.5;
+  for (let y = box.top; y < box.bottom; y++) {
+    const ty = y + 0.5;
     // Source coordinates of the row's first centre, moved by (ia, ib) per output pixel.
     const u0 = ia * (box.left + 0.5) + ic * ty + ie - 0.5;
     const v0 = ib * (box.left + 0.5) + id * ty + iff - 0.5;
-    const row = y * width * 4;
     // Columns whose sample touches the source at all, and those whose four taps all lie inside it.
     const [t0, t1] = span(u0, ia, -1, sw, span(v0, ib, -1, sh, [0, width]));
     const [f0, f1] = span(u0, ia, 0, sw - 1, span(v0, ib, 0, sh - 1, [t0, t1]));
+    if (t1 <= t0) continue;
+    out.fill(0, t0 * 4, t1 * 4);
     for (let x = t0; x < t1; x++) {
       if (x === f0 && f1 > f0) {
-        interiorRun(src, sw, out, row, u0, v0, ia, ib, f0, f1);
+        interiorRun(src, sw, out, 0, u0, v0, ia, ib, f0, f1);
         x = f1 - 1;
         continue;
       }
-      edgePixel(src, sw, sh, out, row + x * 4, u0 + ia * x, v0 + ib * x);
+      edgePixel(src, sw, sh, out, x * 4, u0 + ia * x, v0 + ib * x);
     }
+    onRow(y, out, t0, t1);
   }
-  return { data: out, width, height, left: box.left, top: box.top };
 }
+
+type PixelBoxLike = { left: number; top: number; right: number; bottom: number };
 
 /** The x range [from, to) within `within` where lo < c0 + k·x < hi (strictly inside, as the samplers need). */
 function span(c0: number, k: number, lo: number, hi: number, within: [number, number]): [number, number] {
@@ -82,13 +96,26 @@ function interiorRun(src: Uint8Array | Uint8ClampedArray, sw: number, out: Uint8
     const i01 = i00 + 4;
     const i10 = i00 + sw * 4;
     const i11 = i10 + 4;
+    const o = row + x * 4;
+    if ((src[i00 + 3] | src[i01 + 3] | src[i10 + 3] | src[i11 + 3]) === 0) continue;
+    if ((src[i00 + 3] & src[i01 + 3] & src[i10 + 3] & src[i11 + 3]) === 255) {
+      // all four taps opaque: premultiplied and straight colour are the same, no division
+      const g00 = (1 - fx) * (1 - fy);
+      const g01 = fx * (1 - fy);
+      const g10 = (1 - fx) * fy;
+      const g11 = fx * fy;
+      out[o] = g00 * src[i00] + g01 * src[i01] + g10 * src[i10] + g11 * src[i11] + 0.5;
+      out[o + 1] = g00 * src[i00 + 1] + g01 * src[i01 + 1] + g10 * src[i10 + 1] + g11 * src[i11 + 1] + 0.5;
+      out[o + 2] = g00 * src[i00 + 2] + g01 * src[i01 + 2] + g10 * src[i10 + 2] + g11 * src[i11 + 2] + 0.5;
+      out[o + 3] = 255;
+      continue;
+    }
     const w00 = (1 - fx) * (1 - fy) * src[i00 + 3];
     const w01 = fx * (1 - fy) * src[i01 + 3];
     const w10 = (1 - fx) * fy * src[i10 + 3];
     const w11 = fx * fy * src[i11 + 3];
     const al = w00 + w01 + w10 + w11;
     if (al <= 0) continue;
-    const o = row + x * 4;
     const inv = 1 / al;
     out[o] = (w00 * src[i00] + w01 * src[i01] + w10 * src[i10] + w11 * src[i11]) * inv + 0.5;
     out[o + 1] = (w00 * src[i00 + 1] + w01 * src[i01 + 1] + w10 * src[i10 + 1] + w11 * src[i11 + 1]) * inv + 0.5;

@@ -28,6 +28,20 @@ function blendTable(mode: string): Float64Array | null {
   return table;
 }
 
+// The same values rounded to bytes, for an opaque source over an opaque backdrop, where the
+// general formula below reduces to Co = B(Cb, Cs).
+const roundedTables = new Map<string, Uint8Array>();
+
+function roundedTable(mode: string, table: Float64Array): Uint8Array {
+  let rounded = roundedTables.get(mode);
+  if (!rounded) {
+    rounded = new Uint8Array(65536);
+    for (let i = 0; i < 65536; i++) rounded[i] = table[i] <= 0 ? 0 : table[i] >= 255 ? 255 : (table[i] + 0.5) | 0;
+    roundedTables.set(mode, rounded);
+  }
+  return rounded;
+}
+
 // Source-over (or source-atop) with blending, on straight 8-bit RGBA, following W3C
 // "Compositing and Blending Level 1", section 9.1 (general formula): Cs' = (1 - ab) Cs +
 // ab B(Cb, Cs); ao = as + ab (1 - as); Co = (as Cs' + (1 - as) ab Cb) / ao. For source-atop
@@ -43,6 +57,7 @@ export function compositeOnto(canvas: RgbaImage, source: RgbaImage, options: Com
   if (nonSeparable) return compositeNonSeparable(canvas, source, options, nonSeparable, x0, y0, x1, y1);
 
   const table = blendTable(options.blendMode);
+  const opaqueTable = table && roundedTable(options.blendMode, table);
   const clip = options.clipToBackdrop === true;
   const mask = options.mask ?? null;
   const opacity255 = Math.min(1, options.opacity) / (255 * 255);
@@ -71,12 +86,20 @@ export function compositeOnto(canvas: RgbaImage, source: RgbaImage, options: Com
         dst[di + 3] = (as * 255 + 0.5) | 0;
         continue;
       }
-      if (table === null && as >= 1) {
-        dst[di] = src[si];
-        dst[di + 1] = src[si + 1];
-        dst[di + 2] = src[si + 2];
-        if (!clip) dst[di + 3] = 255;
-        continue;
+      if (as >= 1) {
+        if (opaqueTable === null) {
+          dst[di] = src[si];
+          dst[di + 1] = src[si + 1];
+          dst[di + 2] = src[si + 2];
+          if (!clip) dst[di + 3] = 255;
+          continue;
+        }
+        if (abByte === 255) {
+          dst[di] = opaqueTable[(dst[di] << 8) | src[si]];
+          dst[di + 1] = opaqueTable[(dst[di + 1] << 8) | src[si + 1]];
+          dst[di + 2] = opaqueTable[(dst[di + 2] << 8) | src[si + 2]];
+          continue;
+        }
       }
       const ab = abByte / 255;
       const ao = clip ? ab : as + ab - as * ab;

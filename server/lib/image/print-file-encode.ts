@@ -5,6 +5,11 @@ import type { RgbaImage } from './rgba-image';
 
 export type EncodedPrintFile = { buffer: Buffer; contentType: 'image/png' | 'image/jpeg'; extension: 'png' | 'jpg' };
 
+// zlib level 6 without adaptive filtering: measured on the 11 oz mug wrap at 300 DPI, level 6 with
+// adaptive filtering makes a file about half the size but takes 2.5x as long, level 9 is as slow
+// for 6 % less, level 1 is a third faster but nearly twice the size.
+export const PRINT_PNG_OPTIONS = { compressionLevel: 6, adaptiveFiltering: false } as const;
+
 // JPEG quality for print: high enough that blocking does not show on press (common practice, from memory).
 const JPEG_QUALITY = 95;
 
@@ -24,7 +29,7 @@ export async function encodePrintFile(image: RgbaImage, output: OutputSpec): Pro
   if (output.format === 'jpeg') {
     return { buffer: await pipeline.jpeg({ quality: JPEG_QUALITY, chromaSubsampling: '4:4:4' }).toBuffer(), contentType: 'image/jpeg', extension: 'jpg' };
   }
-  const png = await pipeline.png({ compressionLevel: 6, adaptiveFiltering: false }).toBuffer();
+  const png = await pipeline.png(PRINT_PNG_OPTIONS).toBuffer();
   return { buffer: withSrgbChunk(png), contentType: 'image/png', extension: 'png' };
 }
 

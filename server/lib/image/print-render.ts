@@ -1,10 +1,13 @@
 import sharp from 'sharp';
 import { applyRecolour, type Recolour } from '../../../shared/colour';
-import { compose, scale, type Rect } from '../../../shared/geometry';
+import type { Rect } from '../../../shared/geometry';
 import type { MotifDrawOp, RenderPlan, TextDrawOp } from '../../../shared/scene';
-import { drawTransformed, shrinkFactor, type SourcePixels } from './affine-sample';
+import type { SourcePixels } from './affine-sample';
 import { compositeOnto } from './composite-rgba';
+import { drawMotifOnto } from './motif-layer';
 import type { RgbaImage } from './rgba-image';
+
+export { motifLayer } from './motif-layer';
 
 /** The full-resolution PNG of one motif version, decoded to straight RGBA. */
 export type LoadMotifPixels = (motifId: string, version: number) => Promise<SourcePixels>;
@@ -22,14 +25,20 @@ export type PrintRenderNote = { placementId: string; code: 'render.text_skipped'
 
 export type PrintRender = { image: RgbaImage; notes: PrintRenderNote[] };
 
-// Below this the bilinear sampler would skip source pixels (aliasing); the motif is first
-// reduced with a Lanczos filter, as a downscaled bitmap drawn through compose(scale(k), matrix).
-const PRE_REDUCE_BELOW = 0.75;
+// Sources fetched and decoded ahead of the op being drawn, so storage and decoding overlap drawing.
+const LOAD_AHEAD = 3;
+
+const quiet = <T>(p: Promise<T>) => {
+  // handled here so a load failing while an earlier op is drawn is not "unhandled"; awaited later
+  p.catch(() => undefined);
+  return p;
+};
 
 /**
  * Executes the shared render plan at the template's exact pixel size: the same matrices, opacity,
  * blend modes (W3C Compositing Level 1 formulas, via compositeOnto), recolour and clips that the
- * editor's canvas draws, from full-resolution motif pixels, onto a transparent canvas.
+ * editor's canvas draws, from full-resolution motif pixels, onto a transparent canvas. Each
+ * placement touches only the template pixels of its own box.
  */
 export async function renderPrintFile(plan: RenderPlan, options: PrintRenderOptions): Promise<PrintRender> {
   const { width, height } = plan.size;
@@ -37,46 +46,39 @@ export async function renderPrintFile(plan: RenderPlan, options: PrintRenderOpti
   const whole: Rect = { x: 0, y: 0, width, height };
   const notes: PrintRenderNote[] = [];
   const sources = new Map<string, Promise<SourcePixels>>();
-  const motifPixels = (op: MotifDrawOp) => {
+  const motifSource = (op: MotifDrawOp) => {
     const key = `${op.motifId}@${op.version}:${JSON.stringify(op.recolour)}`;
     let p = sources.get(key);
     if (!p) {
-      p = options.loadMotif(op.motifId, op.version).then((px) => recoloured(px, op.recolour));
+      p = quiet(options.loadMotif(op.motifId, op.version).then((px) => recoloured(px, op.recolour)));
       sources.set(key, p);
     }
     return p;
   };
+  // Text is rasterised by librsvg on sharp's threads: all of it starts at once.
+  const texts = new Map<number, Promise<RgbaImage | null>>();
+  plan.ops.forEach((op, i) => {
+    if (op.kind === 'text' && options.drawText) texts.set(i, quiet(options.drawText(op, clipOf(op.clip, whole))));
+  });
 
   for (let i = 0; i < plan.ops.length; i++) {
+    for (const ahead of plan.ops.slice(i, i + LOAD_AHEAD + 1)) if (ahead.kind === 'motif') void motifSource(ahead);
     const op = plan.ops[i];
-    const clip = op.clip ? intersect(op.clip, whole) : whole;
-    let layer: RgbaImage | null = null;
-    if (op.kind === 'motif') layer = await motifLayer(await motifPixels(op), op, clip);
-    else if (options.drawText) layer = await options.drawText(op, clip);
-    else notes.push({ placementId: op.placementId, code: 'render.text_skipped', message: 'Text is not drawn into print files yet; convert it to a motif' });
-    if (layer) compositeOnto(canvas, layer, { blendMode: op.blendMode, opacity: op.opacity });
+    const composite = { blendMode: op.blendMode, opacity: op.opacity };
+    if (op.kind === 'motif') {
+      await drawMotifOnto(canvas, await motifSource(op), op, clipOf(op.clip, whole), composite);
+    } else if (options.drawText) {
+      const layer = await texts.get(i)!;
+      if (layer) compositeOnto(canvas, layer, composite);
+    } else {
+      notes.push({ placementId: op.placementId, code: 'render.text_skipped', message: 'Text is not drawn into print files yet; convert it to a motif' });
+    }
     await options.onProgress?.((i + 1) / plan.ops.length);
   }
   return { image: canvas, notes };
 }
 
-export async function motifLayer(source: SourcePixels, op: Pick<MotifDrawOp, 'matrix' | 'width' | 'height'>, clip: Rect): Promise<RgbaImage | null> {
-  // The plan's matrix starts from the motif's natural size, whatever size the PNG really is.
-  let matrix = compose(scale(op.width / source.width, op.height / source.height), op.matrix);
-  let pixels = source;
-  const k = shrinkFactor(matrix);
-  if (k < PRE_REDUCE_BELOW) {
-    const w = Math.max(1, Math.round(source.width * k));
-    const h = Math.max(1, Math.round(source.height * k));
-    const { data } = await sharp(Buffer.from(source.data.buffer, source.data.byteOffset, source.data.byteLength), { raw: { width: source.width, height: source.height, channels: 4 } })
-      .resize(w, h, { fit: 'fill', kernel: 'lanczos3' })
-      .raw()
-      .toBuffer({ resolveWithObject: true });
-    matrix = compose(scale(source.width / w, source.height / h), matrix);
-    pixels = { data, width: w, height: h };
-  }
-  return drawTransformed(pixels, matrix, clip);
-}
+const clipOf = (clip: Rect | null, whole: Rect) => (clip ? intersect(clip, whole) : whole);
 
 function recoloured(px: SourcePixels, recolour: Recolour): SourcePixels {
   if (recolour.kind === 'none') return px;

@@ -1,6 +1,7 @@
 import { NavLink } from 'react-router-dom';
 import { classNames } from '../../components/ui/class-names';
 
+// Members and the studio's settings are in the account menu, so the row fits a laptop screen.
 export const mainNavItems = [
   { to: '/library', label: 'Library' },
   { to: '/originals', label: 'Originals' },
@@ -9,8 +10,6 @@ export const mainNavItems = [
   { to: '/sales', label: 'What sells' },
   { to: '/templates', label: 'Templates' },
   { to: '/activity', label: 'Activity' },
-  { to: '/members', label: 'Members' },
-  { to: '/settings', label: 'Settings' },
 ] as const;
 
 export function MainNav() {

@@ -44,6 +44,7 @@ export function UserMenu() {
         }
         items={[
           { id: 'home', label: 'Studio home', onSelect: () => navigate('/') },
+          { id: 'members', label: 'Members', onSelect: () => navigate('/members') },
           { id: 'settings', label: 'Studio settings', onSelect: () => navigate('/settings') },
           {
             id: 'sign-out',

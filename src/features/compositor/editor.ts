@@ -26,6 +26,8 @@ export type EditorState = {
   readonly helpOpen: boolean;
   /** The server's soft proof of the saved design, drawn instead of the artwork while "as printed" is on. */
   readonly printView: MotifBitmap | null;
+  /** The template's printer's guide image once loaded; null when the template has none. Never printed. */
+  readonly guideImage: MotifBitmap | null;
 };
 
 type Listener = () => void;
@@ -53,7 +55,7 @@ export class ProductEditor {
     this.history = createHistory(scene, HISTORY_LIMIT);
     this.state = {
       scene, selection: [], viewport, overlays: defaultOverlays, rulerUnit: template.unit,
-      guides: [], marquee: null, canUndo: false, canRedo: false, committedLayout: scene.layout, helpOpen: false, printView: null,
+      guides: [], marquee: null, canUndo: false, canRedo: false, committedLayout: scene.layout, helpOpen: false, printView: null, guideImage: null,
     };
   }
 
@@ -171,6 +173,10 @@ export class ProductEditor {
 
   setPrintView(printView: MotifBitmap | null): void {
     if (printView !== this.state.printView) this.set({ printView });
+  }
+
+  setGuideImage(guideImage: MotifBitmap | null): void {
+    if (guideImage !== this.state.guideImage) this.set({ guideImage });
   }
 
   /** After loading a saved layout (e.g. reload after a conflict): a fresh history. */

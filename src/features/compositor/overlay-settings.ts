@@ -8,12 +8,14 @@ export type OverlaySettings = {
   readonly seam: boolean;
   readonly frontCentre: boolean;
   readonly rulers: boolean;
+  /** The template's printer's guide image, laid over the design (shown only when the template has one). */
+  readonly guideImage: boolean;
 };
 
 export type OverlayName = keyof OverlaySettings;
 
 export const defaultOverlays: OverlaySettings = {
-  bleed: true, trim: true, safeArea: true, printArea: true, keepOuts: true, seam: true, frontCentre: true, rulers: true,
+  bleed: true, trim: true, safeArea: true, printArea: true, keepOuts: true, seam: true, frontCentre: true, rulers: true, guideImage: true,
 };
 
 export const overlayLabels: Record<OverlayName, string> = {
@@ -25,6 +27,10 @@ export const overlayLabels: Record<OverlayName, string> = {
   seam: 'Wrap seam',
   frontCentre: 'Front centre',
   rulers: 'Rulers',
+  guideImage: 'Printer’s guide image',
 };
+
+// Half see-through: the design stays readable under the printer's marks.
+export const GUIDE_IMAGE_OPACITY = 0.5;
 
 export type RulerUnit = 'in' | 'mm';

@@ -2,7 +2,7 @@ import { pointsToPixels } from '@shared/templates';
 import { createTextPlacement, type TextPlacement } from '@shared/scene';
 import type { Vec } from '@shared/geometry';
 import { resolveFontId, shippedFonts } from '@shared/text/shipped-fonts';
-import { layoutLines } from '@shared/text/text-layout';
+import { arcSagitta, arcWidth, layoutLines } from '@shared/text/text-layout';
 import { fontCache } from './render/font-cache';
 
 /** Width in px of one line at `sizePx`, without letter spacing. */
@@ -11,12 +11,15 @@ export type MeasureLine = (line: string, sizePx: number) => number;
 // Line height 1.2 em: common practice for display text.
 export const LINE_HEIGHT_EM = 1.2;
 
-/** The text's box in template px: the widest line plus its letter spacing, and one line height per line. */
-export function measureTextBox(content: string, sizePx: number, letterSpacingThousandths: number, measure: MeasureLine): { width: number; height: number } {
+/**
+ * The text's box in template px: the widest line plus its letter spacing, one line height per
+ * line; bent along an arc, the chord of the widest line and its sagitta on top (as the print lays it out).
+ */
+export function measureTextBox(content: string, sizePx: number, letterSpacingThousandths: number, measure: MeasureLine, arcDeg = 0): { width: number; height: number } {
   const lines = (content || ' ').split('\n');
   const spacing = (letterSpacingThousandths / 1000) * sizePx;
-  const width = Math.max(...lines.map((l) => measure(l, sizePx) + spacing * Math.max(0, [...l].length - 1)));
-  return { width: Math.max(sizePx * 0.5, width), height: lines.length * sizePx * LINE_HEIGHT_EM };
+  const widest = Math.max(...lines.map((l) => measure(l, sizePx) + spacing * Math.max(0, [...l].length - 1)));
+  return { width: Math.max(sizePx * 0.5, arcWidth(widest, arcDeg)), height: lines.length * sizePx * LINE_HEIGHT_EM + arcSagitta(widest, arcDeg) };
 }
 
 let measuringContext: CanvasRenderingContext2D | null = null;
@@ -35,9 +38,9 @@ export function measureFor(fontId: string): MeasureLine {
 
 export const measureWithCanvas: MeasureLine = measureFor('source-sans-3');
 
-/** The same text with its box measured again after a change of content, size or spacing. */
+/** The same text with its box measured again after a change of content, size, spacing or arc. */
 export function remeasured(p: TextPlacement, dpi: number, measure: MeasureLine = measureFor(p.fontId)): TextPlacement {
-  const box = measureTextBox(p.content, pointsToPixels(p.sizePt, dpi), p.letterSpacing, measure);
+  const box = measureTextBox(p.content, pointsToPixels(p.sizePt, dpi), p.letterSpacing, measure, p.arcDeg);
   return box.width === p.boxWidth && box.height === p.boxHeight ? p : { ...p, boxWidth: box.width, boxHeight: box.height };
 }
 

@@ -5,6 +5,7 @@ import { createScene, type Layout } from '../../../shared/scene';
 import type { Template } from '../../../shared/templates';
 import { defaultOverlays, type OverlaySettings } from '../../../src/features/compositor/overlay-settings';
 import { drawScene } from '../../../src/features/compositor/render/draw-scene';
+import { fontCache } from '../../../src/features/compositor/render/font-cache';
 import { MotifImageCache, type MotifBitmap } from '../../../src/features/compositor/render/image-cache';
 
 export type ParityRenderInput = {
@@ -35,6 +36,8 @@ async function renderForParity(input: ParityRenderInput): Promise<string> {
     images.get(key.slice(0, at), Number(key.slice(at + 1)));
   }
   if (pending > 0) await allLoaded;
+  // text is drawn from the shipped fonts' outlines: wait until each font is parsed (a faint box until then)
+  for (const p of input.layout.placements) if (p.type === 'text' && !(await fontCache.ready(p.fontId))) throw new Error(`font ${p.fontId} did not load`);
 
   const canvas = document.createElement('canvas');
   canvas.width = input.width;

@@ -6,4 +6,5 @@ export const compositorKeys = {
   // by saved revision: the server checks what was saved, so each save asks again
   preflight: (productId: string, revision: number) => [...compositorKeys.all, 'preflight', productId, revision] as const,
   softProof: (productId: string, revision: number, mask: boolean) => [...compositorKeys.all, 'soft-proof', productId, revision, mask] as const,
+  guideImage: (url: string) => [...compositorKeys.all, 'guide-image', url] as const,
 };

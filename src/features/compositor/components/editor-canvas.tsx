@@ -6,6 +6,7 @@ import { CanvasView } from '../render/canvas-view';
 import type { LoadThumb } from '../render/image-cache';
 import { commandForKey, isTypingTarget } from '../tools/keyboard';
 import { runCommand } from '../tools/run-command';
+import { TouchPinch } from '../tools/pinch';
 import { SelectTool } from '../tools/select-tool';
 import { panBy, screenPoint, screenToTemplate, zoomAbout } from '../viewport';
 import { MOTIF_DRAG_TYPE, readMotifDrag } from './tray-drag';
@@ -24,6 +25,7 @@ export function EditorCanvas({ editor, onDropMotif, loadThumb }: EditorCanvasPro
   const toolRef = useRef<SelectTool | null>(null);
   const panRef = useRef<{ last: Vec } | null>(null);
   const spaceRef = useRef(false);
+  const pinchRef = useRef(new TouchPinch());
 
   useEffect(() => {
     const canvas = canvasRef.current;
@@ -88,6 +90,12 @@ export function EditorCanvas({ editor, onDropMotif, loadThumb }: EditorCanvasPro
   const onPointerDown = (e: PointerEvent<HTMLCanvasElement>) => {
     e.currentTarget.setPointerCapture(e.pointerId);
     e.currentTarget.focus();
+    if (e.pointerType === 'touch') {
+      const role = pinchRef.current.down(e.pointerId, local(e), editor.viewport);
+      // a second finger makes it a pinch: whatever the first finger began is undone
+      if (role === 'pinch') toolRef.current?.cancel();
+      if (role !== 'tool') return;
+    }
     if (e.button === 1 || spaceRef.current) {
       panRef.current = { last: { x: e.clientX, y: e.clientY } };
       return;
@@ -96,6 +104,11 @@ export function EditorCanvas({ editor, onDropMotif, loadThumb }: EditorCanvasPro
     toolRef.current?.pointerDown(local(e), mods(e));
   };
   const onPointerMove = (e: PointerEvent<HTMLCanvasElement>) => {
+    if (e.pointerType === 'touch') {
+      const pinched = pinchRef.current.move(e.pointerId, local(e));
+      if (pinched) editor.setViewport(pinched);
+      if (pinchRef.current.active) return;
+    }
     const pan = panRef.current;
     if (pan) {
       editor.setViewport(panBy(editor.viewport, e.clientX - pan.last.x, e.clientY - pan.last.y));
@@ -104,9 +117,18 @@ export function EditorCanvas({ editor, onDropMotif, loadThumb }: EditorCanvasPro
     }
     toolRef.current?.pointerMove(local(e), mods(e));
   };
-  const onPointerUp = () => {
+  const onPointerUp = (e: PointerEvent<HTMLCanvasElement>) => {
+    if (e.pointerType === 'touch') {
+      const pinching = pinchRef.current.active;
+      pinchRef.current.up(e.pointerId);
+      if (pinching) return;
+    }
     if (panRef.current) panRef.current = null;
     else toolRef.current?.pointerUp();
+  };
+  const onPointerCancel = (e: PointerEvent<HTMLCanvasElement>) => {
+    if (e.pointerType === 'touch') pinchRef.current.up(e.pointerId);
+    toolRef.current?.cancel();
   };
 
   const onDragOver = (e: DragEvent) => {
@@ -127,13 +149,13 @@ export function EditorCanvas({ editor, onDropMotif, loadThumb }: EditorCanvasPro
       <canvas
         ref={canvasRef}
         tabIndex={0}
-        aria-label="Product layout. Drag motifs here; press ? for the keyboard shortcuts."
+        aria-label="Product layout. Drag motifs here; pinch with two fingers to zoom; press ? for the keyboard shortcuts."
         data-testid="editor-canvas"
         className="absolute inset-0 touch-none outline-none focus-visible:ring-2 focus-visible:ring-tide"
         onPointerDown={onPointerDown}
         onPointerMove={onPointerMove}
         onPointerUp={onPointerUp}
-        onPointerCancel={() => toolRef.current?.cancel()}
+        onPointerCancel={onPointerCancel}
       />
     </div>
   );

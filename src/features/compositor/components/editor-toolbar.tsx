@@ -14,7 +14,7 @@ type EditorToolbarProps = { editor: ProductEditor; screen: () => { width: number
 export function EditorToolbar({ editor, screen }: EditorToolbarProps) {
   const state = useEditorSelector(editor, (s) => ({
     canUndo: s.canUndo, canRedo: s.canRedo, hasSelection: s.selection.length > 0, viewport: s.viewport,
-    overlays: s.overlays, rulerUnit: s.rulerUnit, mirror: s.scene.layout.mirror,
+    overlays: s.overlays, rulerUnit: s.rulerUnit, mirror: s.scene.layout.mirror, hasGuideImage: s.guideImage !== null,
   }));
   const has = state.hasSelection;
   // The toolbar's commands never cancel a drag, so a throwaway tool is enough for the context.
@@ -28,7 +28,8 @@ export function EditorToolbar({ editor, screen }: EditorToolbarProps) {
     editor.change((l) => addPlacement(l, t), [t.id]);
   };
   const isWrap = editor.geometry.wrap !== null;
-  const overlayNames = Object.keys(overlayLabels) as OverlayName[];
+  // a toggle only for guides this template has
+  const overlayNames = (Object.keys(overlayLabels) as OverlayName[]).filter((name) => name !== 'guideImage' || state.hasGuideImage);
   return (
     <div role="toolbar" aria-label="Editing" className="flex flex-wrap items-center gap-1.5">
       <Button size="sm" variant="secondary" disabled={!state.canUndo} onClick={() => editor.undo()}>Undo</Button>

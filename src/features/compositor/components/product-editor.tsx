@@ -3,6 +3,7 @@ import type { Vec } from '@shared/geometry';
 import { addPlacement, type Layout } from '@shared/scene';
 import type { ProductDetail } from '@shared/contracts/products';
 import { isApiRequestError } from '../../../lib/api-client';
+import { useGuideImage } from '../api/get-guide-image';
 import { Autosaver } from '../autosave';
 import { useSettledRevision } from '../preflight/use-settled-revision';
 import { ProductEditor } from '../editor';
@@ -40,6 +41,8 @@ export function ProductEditorView({ product, save, reload, loadThumb }: ProductE
   // the server's checks and the soft proof look at what was saved, so they follow the saved revision
   const savedRevision = useSettledRevision(saveStatus.revision);
   const softProof = useSoftProofView(editor, product.id, savedRevision);
+  const guideImage = useGuideImage(product.templateId);
+  useEffect(() => editor.setGuideImage(guideImage), [editor, guideImage]);
 
   useEffect(() => {
     let last = editor.getState().committedLayout;

@@ -3,6 +3,7 @@ import { mapPlacements, type TextPlacement } from '@shared/scene';
 import { Select } from '../../../components/ui/select-field';
 import type { ProductEditor } from '../editor';
 import { remeasured, SHIPPED_FONTS } from '../text-measure';
+import { ArcField } from './arc-field';
 import { NumberField } from './number-field';
 
 const aligns = [{ value: 'left', label: 'Left' }, { value: 'centre', label: 'Centre' }, { value: 'right', label: 'Right' }] as const;
@@ -26,6 +27,7 @@ export function TextFields({ editor, p }: { editor: ProductEditor; p: TextPlacem
         onChange={(e) => edit({ fontId: e.target.value })} />
       <NumberField label="Size" value={p.sizePt} unit="pt" onCommit={(sizePt) => sizePt > 0 && sizePt <= 2000 && edit({ sizePt })} />
       <NumberField label="Spacing" value={p.letterSpacing} unit="‰" digits={0} onCommit={(letterSpacing) => letterSpacing >= -500 && letterSpacing <= 2000 && edit({ letterSpacing })} />
+      <ArcField editor={editor} p={p} />
       <div className="flex items-center gap-2">
         <label className="flex items-center gap-2 text-xs text-ink-soft">
           Colour <input type="color" value={p.colour} onChange={(e) => edit({ colour: e.target.value })} />

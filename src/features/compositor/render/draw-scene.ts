@@ -7,7 +7,7 @@ import { canvasCompositeFor } from './blend-modes';
 import type { MotifBitmap, MotifImageCache } from './image-cache';
 import { textOutlinePath } from '@shared/text/text-layout';
 import { fontCache } from './font-cache';
-import { drawTemplateOverlays } from './overlays';
+import { drawGuideImage, drawTemplateOverlays } from './overlays';
 
 export type Ctx2D = CanvasRenderingContext2D;
 
@@ -20,6 +20,8 @@ export type DrawSceneOptions = {
   screen: { width: number; height: number };
   /** Drawn over the whole print file instead of the artwork (the soft proof: the design as it would print). */
   printView?: MotifBitmap | null;
+  /** The printer's guide image, stretched over the whole file above the design; never in the print file. */
+  guideImage?: MotifBitmap | null;
 };
 
 // Our own pasteboard: a calm sand grey, so the white blank stands out.
@@ -77,6 +79,8 @@ export function drawScene(ctx: Ctx2D, scene: Scene, template: Template, images: 
   ctx.rect(p.x, p.y + p.height, p.width, -p.height); // opposite winding cuts the hole
   ctx.fill('nonzero');
 
+  // Not over the print simulation: that view shows only what the press would print.
+  if (overlays.guideImage && options.guideImage && !options.printView) drawGuideImage(ctx, options.guideImage, geometry.bleedRect, screenM);
   drawTemplateOverlays(ctx, geometry, overlays, screenM, viewport.zoom * dpr);
 }
 

@@ -1,6 +1,7 @@
-import type { Affine, Rect } from '@shared/geometry';
+import { compose, scale, type Affine, type Rect } from '@shared/geometry';
 import type { TemplateGeometry } from '@shared/templates';
-import type { OverlaySettings } from '../overlay-settings';
+import { GUIDE_IMAGE_OPACITY, type OverlaySettings } from '../overlay-settings';
+import type { MotifBitmap } from './image-cache';
 
 type Ctx2D = CanvasRenderingContext2D;
 
@@ -52,6 +53,19 @@ export function drawTemplateOverlays(ctx: Ctx2D, g: TemplateGeometry, o: Overlay
   if (o.safeArea) stroke(ctx, g.safeRect, overlayColours.safe, [6 * px, 4 * px]);
   if (o.seam && g.seamX !== null) vertical(ctx, g.seamX, g.bleedRect, overlayColours.seam, [2 * px, 3 * px], 'Seam', px);
   if (o.frontCentre && g.frontCentreX !== null) vertical(ctx, g.frontCentreX, g.bleedRect, overlayColours.frontCentre, [10 * px, 4 * px, 2 * px, 4 * px], 'Front centre', px);
+  ctx.restore();
+}
+
+/** The printer's guide image stretched over the whole file (its drawing covers the file edge to edge), half see-through. */
+export function drawGuideImage(ctx: Ctx2D, image: MotifBitmap, file: Rect, screenM: Affine): void {
+  ctx.save();
+  const m = compose(scale(file.width / image.width, file.height / image.height), [1, 0, 0, 1, file.x, file.y], screenM);
+  ctx.setTransform(m[0], m[1], m[2], m[3], m[4], m[5]);
+  ctx.globalAlpha = GUIDE_IMAGE_OPACITY;
+  ctx.globalCompositeOperation = 'source-over';
+  ctx.imageSmoothingEnabled = true;
+  ctx.imageSmoothingQuality = 'low';
+  ctx.drawImage(image, 0, 0);
   ctx.restore();
 }
 

@@ -53,9 +53,10 @@ export const shortcutList: ReadonlyArray<{ keys: string; does: string }> = [
   { keys: '0', does: 'Fit the whole print file in view' },
   { keys: 'Shift while turning', does: 'Turn in steps of 15°' },
   { keys: 'Shift + click', does: 'Add to or take from the selection' },
-  { keys: 'Alt while dragging', does: 'Move without snapping' },
+  { keys: 'Alt while dragging', does: 'Move or scale without snapping' },
   { keys: 'Space + drag, or middle button', does: 'Pan the view' },
   { keys: 'Ctrl/Cmd + wheel', does: 'Zoom about the pointer' },
+  { keys: 'Two fingers on a touch screen', does: 'Spread or pinch to zoom, move together to pan' },
   { keys: 'Escape', does: 'Cancel the drag in progress, or clear the selection' },
   { keys: '?', does: 'Show this list' },
 ];

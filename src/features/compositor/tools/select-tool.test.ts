@@ -95,6 +95,19 @@ describe('select tool', () => {
     expect((editor.layout.placements[0] as typeof puffin).scale).toBeCloseTo(1, 9);
   });
 
+  it('snaps the dragged corner’s edge while scaling and shows the guide', () => {
+    const { editor, tool, at } = setUp();
+    editor.select(['puffin']);
+    // the puffin is 200 × 300 about (1000, 500); dragged to ×2.74 its right edge would sit at 1274,
+    // 1 px from the front centre (within 6 screen px = 12 template px at zoom 0.5): it lands at ×2.75
+    tool.pointerDown(at(1100, 650), { shift: false, alt: false });
+    tool.pointerMove(at(1000 + 2.74 * 100, 500 + 2.74 * 150), { shift: false, alt: false });
+    expect(editor.getState().guides.map((g) => [g.axis, g.position])).toContainEqual(['x', 1275]);
+    tool.pointerUp();
+    expect((editor.layout.placements[0] as typeof puffin).scale).toBeCloseTo(0.5 * 2.75, 9);
+    expect(editor.getState().guides).toEqual([]);
+  });
+
   it('selects every placement a marquee touches', () => {
     const { editor, tool, at } = setUp();
     tool.pointerDown(at(500, 100), none);

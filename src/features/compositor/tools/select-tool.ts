@@ -1,7 +1,7 @@
 import { rectsIntersect, type Rect, type Vec } from '@shared/geometry';
 import {
-  hitTest, mirrorAxisX, movePlacements, placementBounds, rotatePlacements, scalePlacements, snapMove, snapTargets,
-  type Layout, type SnapTargets,
+  hitTest, mirrorAxisX, movePlacements, placementBounds, rotatePlacements, scalePlacements, snapMove, snapScale, snapTargets,
+  type Layout, type ScaleCorner, type SnapTargets,
 } from '@shared/scene';
 import type { ProductEditor } from '../editor';
 import { screenRectToTemplate, screenToTemplate, type ScreenPoint } from '../viewport';
@@ -23,7 +23,7 @@ export const SNAP_THRESHOLD_PX = 6;
 type Idle = { name: 'idle' };
 type Pointing = { name: 'pointing'; start: ScreenPoint; intent: 'translate' | 'marquee'; hitId: string | null; additive: boolean };
 type Translating = { name: 'translating'; start: ScreenPoint; snapshot: Layout; ids: readonly string[]; startBounds: Rect; targets: SnapTargets };
-type Scaling = { name: 'scaling'; start: ScreenPoint; snapshot: Layout; ids: readonly string[]; centre: Vec };
+type Scaling = { name: 'scaling'; start: ScreenPoint; snapshot: Layout; ids: readonly string[]; centre: Vec; startBounds: Rect; corner: ScaleCorner; targets: SnapTargets };
 type Rotating = { name: 'rotating'; start: ScreenPoint; snapshot: Layout; ids: readonly string[]; centre: Vec; originalDeg: number };
 type Marquee = { name: 'marquee'; start: ScreenPoint; base: readonly string[] };
 
@@ -52,7 +52,8 @@ export class SelectTool {
         const only = ids.length === 1 ? snapshot.placements.find((p) => p.id === ids[0]) : undefined;
         this.state = { name: 'rotating', start: screen, snapshot, ids, centre, originalDeg: only?.rotationDeg ?? 0 };
       } else {
-        this.state = { name: 'scaling', start: screen, snapshot, ids, centre };
+        const corner: ScaleCorner = { x: handle.kind === 'scale-nw' || handle.kind === 'scale-sw' ? -1 : 1, y: handle.kind === 'scale-nw' || handle.kind === 'scale-ne' ? -1 : 1 };
+        this.state = { name: 'scaling', start: screen, snapshot, ids, centre, startBounds: bounds, corner, targets: snapTargets(snapshot, host.geometry, host.selection) };
       }
       return;
     }
@@ -101,8 +102,10 @@ export class SelectTool {
     } else if (s.name === 'scaling') {
       const from = screenToTemplate(host.viewport, s.start);
       const to = screenToTemplate(host.viewport, screen);
-      const factor = scaleFactor(s.centre, from, to);
-      host.previewGesture((snapshot) => scalePlacements(snapshot, s.ids, factor, s.ids.length > 1 ? s.centre : undefined));
+      const free = scaleFactor(s.centre, from, to);
+      // the dragged corner's edges snap as a move's do; Alt again holds snapping off
+      const snap = mods.alt ? { factor: free, guides: [] } : snapScale(s.startBounds, free, s.corner, s.targets, SNAP_THRESHOLD_PX / host.viewport.zoom);
+      host.previewGesture((snapshot) => scalePlacements(snapshot, s.ids, snap.factor, s.ids.length > 1 ? s.centre : undefined), { guides: snap.guides });
     } else if (s.name === 'rotating') {
       const from = screenToTemplate(host.viewport, s.start);
       const to = screenToTemplate(host.viewport, screen);

@@ -30,7 +30,7 @@ export function ProductPreview({ product }: { product: ProductDetail }) {
           alt={`Preview of ${product.name}: ${viewLabels[view]}`}
           onLoad={() => setState('ready')}
           onError={() => setState('failed')}
-          className={classNames('max-h-full max-w-full object-contain', state !== 'ready' && 'invisible')}
+          className={classNames('absolute inset-0 size-full object-contain p-2', state !== 'ready' && 'invisible')}
         />
         {state === 'loading' && <span className="absolute inset-0 grid place-items-center"><Spinner className="size-6" /><span className="sr-only">Rendering the preview…</span></span>}
         {state === 'failed' && <p className="absolute inset-0 grid place-items-center p-4 text-center text-ink-soft">The preview could not be rendered. Open the layout to check the product.</p>}

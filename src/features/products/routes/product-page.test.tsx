@@ -91,5 +91,11 @@ describe('the product’s page', () => {
     expect(screen.queryByRole('form', { name: 'New variant' })).toBeNull();
     expect(screen.queryByRole('button', { name: 'Save details' })).toBeNull();
     expect((await screen.findByText('PUF-MUG-NVY', undefined, slow)).tagName).toBe('SPAN');
+    // details are read as text, not shown as a form the reviewer cannot use
+    const details = screen.getByLabelText('Product details');
+    expect(details.tagName).toBe('DL');
+    expect(details.textContent).toContain('Navy handle sells best');
+    expect(within(details).getByRole('list', { name: 'Tags' }).textContent).toBe('gift');
+    expect(screen.queryByRole('textbox', { name: 'Notes' })).toBeNull();
   });
 });

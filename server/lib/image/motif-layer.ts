@@ -1,0 +1,59 @@
+import sharp from 'sharp';
+import { compose, scale, type Affine, type Rect } from '../../../shared/geometry';
+import type { MotifDrawOp } from '../../../shared/scene';
+import { drawTransformed, sampleRows, shrinkFactor, transformedBox, type SourcePixels } from './affine-sample';
+import { compositeOnto, type CompositeOptions } from './composite-rgba';
+import type { RgbaImage } from './rgba-image';
+
+// Below this the bilinear sampler would skip source pixels (aliasing); the motif is first
+// reduced with a Lanczos filter, as a downscaled bitmap drawn through compose(scale(k), matrix).
+const PRE_REDUCE_BELOW = 0.75;
+
+type Placed = Pick<MotifDrawOp, 'matrix' | 'width' | 'height'>;
+
+/** The plan's matrix starts from the motif's natural size, whatever size the PNG really is. */
+const pixelMatrix = (source: SourcePixels, op: Placed) => compose(scale(op.width / source.width, op.height / source.height), op.matrix);
+
+/** The reduced size when the op shrinks the source below PRE_REDUCE_BELOW, else null. */
+function reducedSize(source: SourcePixels, matrix: Affine): { width: number; height: number } | null {
+  const k = shrinkFactor(matrix);
+  if (k >= PRE_REDUCE_BELOW) return null;
+  return { width: Math.max(1, Math.round(source.width * k)), height: Math.max(1, Math.round(source.height * k)) };
+}
+
+/**
+ * Draws one motif straight onto the canvas: each template row of its box is sampled (bilinear on
+ * premultiplied colour, affine-sample.ts) and composited at once, so no layer of the motif's
+ * size is ever held. Large reductions go through sharp's Lanczos filter first.
+ */
+export async function drawMotifOnto(canvas: RgbaImage, source: SourcePixels, op: Placed, clip: Rect, composite: CompositeOptions): Promise<void> {
+  const { pixels, matrix } = await samplingSource(source, op);
+  const box = transformedBox(matrix, pixels.width, pixels.height, clip);
+  if (!box) return;
+  const row: RgbaImage = { data: new Uint8Array(0), width: 0, height: 1, left: 0, top: 0 };
+  sampleRows(pixels, matrix, box, (y, data, from, to) => {
+    row.data = data.subarray(from * 4, to * 4);
+    row.width = to - from;
+    row.left = box.left + from;
+    row.top = y;
+    compositeOnto(canvas, row, composite);
+  });
+}
+
+/** The same motif as a layer of template pixels inside `clip` (same box and samples), for callers that composite it themselves. */
+export async function motifLayer(source: SourcePixels, op: Placed, clip: Rect): Promise<RgbaImage | null> {
+  const { pixels, matrix } = await samplingSource(source, op);
+  return drawTransformed(pixels, matrix, clip);
+}
+
+/** The pixels to sample and their matrix: the source itself, or its Lanczos reduction when the op shrinks it a lot. */
+async function samplingSource(source: SourcePixels, op: Placed): Promise<{ pixels: SourcePixels; matrix: Affine }> {
+  const matrix = pixelMatrix(source, op);
+  const reduced = reducedSize(source, matrix);
+  if (!reduced) return { pixels: source, matrix };
+  const { data } = await sharp(Buffer.from(source.data.buffer, source.data.byteOffset, source.data.byteLength), { raw: { width: source.width, height: source.height, channels: 4 } })
+    .resize(reduced.width, reduced.height, { fit: 'fill', kernel: 'lanczos3' })
+    .raw()
+    .toBuffer({ resolveWithObject: true });
+  return { pixels: { data, ...reduced }, matrix: compose(scale(source.width / reduced.width, source.height / reduced.height), matrix) };
+}
