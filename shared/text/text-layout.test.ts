@@ -2,7 +2,7 @@ import opentype from 'opentype.js';
 import { describe, expect, it } from 'vitest';
 import { shippedFonts, resolveFontId } from './shipped-fonts';
 import { loadTestFontStack } from './test-fonts';
-import { arcSagitta, layoutLines, measureText, textOutlinePath } from './text-layout';
+import { ARC_LEAN_EM, arcSagitta, layoutLines, measureText, textOutlinePath } from './text-layout';
 
 const sourceSans = loadTestFontStack('source-sans-3');
 
@@ -56,7 +56,8 @@ describe('text laid out from glyph outlines', () => {
     const bent = measureText(style, sourceSans);
     const s = straight.width;
     const r = s / (Math.PI / 2);
-    expect(bent.width).toBeCloseTo(2 * r * Math.sin(Math.PI / 4), 6);
+    // the box is the chord of the circle through the glyphs' outer edges, one lean beyond the baseline
+    expect(bent.width).toBeCloseTo(2 * (r + 80 * ARC_LEAN_EM) * Math.sin(Math.PI / 4), 6);
     expect(bent.height - straight.height).toBeCloseTo(r * (1 - Math.cos(Math.PI / 4)), 6);
     // bowed upwards: the middle of the drawing is higher than its ends
     const path = textOutlinePath(style, bent, sourceSans);
@@ -64,6 +65,24 @@ describe('text laid out from glyph outlines', () => {
     expect(b.maxX - b.minX).toBeLessThan(straight.width);
     const down = textOutlinePath({ ...style, arcDeg: -90 }, bent, sourceSans);
     expect(pathBounds(down).maxY).not.toBeCloseTo(b.maxY, 0);
+  });
+
+  it('keeps the ink of bent text inside its box, whichever way and however far it bends', () => {
+    // the outline's points (on-curve and control points, which bound a Bézier curve) must stay in the box;
+    // a tenth of an em is allowed at the sides for letters whose ink overhangs their advance, as it does in straight text
+    for (const font of shippedFonts) {
+      const stack = loadTestFontStack(font.id);
+      for (const arcDeg of [-360, -200, -120, -45, 30, 90, 125, 180, 270, 360]) {
+        for (const content of ['Coastal Spring', 'Puffin\nPicnic', 'gjpqy Ågf']) {
+          const style = { content, sizePx: 100, align: 'centre' as const, letterSpacing: 0, arcDeg };
+          const box = measureText(style, stack);
+          const b = pathBounds(textOutlinePath(style, box, stack));
+          const where = `${font.id} ${arcDeg}° ${JSON.stringify(content)}`;
+          expect(b.minX, where).toBeGreaterThanOrEqual(-10);
+          expect(b.maxX, where).toBeLessThanOrEqual(box.width + 10);
+        }
+      }
+    }
   });
 
   it('finds letters of Latin Extended in the second subset and names what no subset has', () => {

@@ -64,17 +64,27 @@ export function arcSagitta(width: number, arcDeg: number): number {
 export function measureText(style: TextStyle, stack: FontStack): LaidOutText {
   const { lines, missing } = layoutLines(style, stack);
   const widest = Math.max(...lines.map((l) => l.width));
-  const width = Math.max(style.sizePx * 0.5, arcWidth(widest, style.arcDeg));
+  const width = Math.max(style.sizePx * 0.5, arcBoxWidth(widest, style.arcDeg, style.sizePx));
   const height = lines.length * style.sizePx * LINE_HEIGHT_EM + arcSagitta(widest, style.arcDeg);
   return { lines, width, height, missing };
 }
 
-/** A bent line is narrower than its straight length: the chord of the arc (a full diameter past half a turn). */
-export function arcWidth(width: number, arcDeg: number): number {
+/**
+ * How far a glyph may reach out from its baseline, in em, away from the circle's centre: one
+ * line height, which the tallest accented capital or deepest swash of the fonts we ship stays under.
+ */
+export const ARC_LEAN_EM = 1.2;
+
+/**
+ * The width a bent line's ink needs: the glyphs at its ends turn outwards, so the box is the
+ * chord of the circle through their outer edges, not of the baseline (a full diameter once the
+ * ends turn past upright).
+ */
+export function arcBoxWidth(width: number, arcDeg: number, sizePx: number): number {
   const angle = Math.abs(radians(arcDeg));
-  if (angle < 1e-6) return width;
-  const r = width / angle;
-  return angle >= Math.PI ? 2 * r : 2 * r * Math.sin(angle / 2);
+  if (angle < 1e-6 || width <= 0) return width;
+  const outer = width / angle + sizePx * ARC_LEAN_EM;
+  return 2 * outer * Math.sin(Math.min(angle / 2, Math.PI / 2));
 }
 
 function transformCommands(commands: OutlineCommand[], m: Affine, out: string[]): void {
@@ -118,7 +128,7 @@ export function textOutlinePath(style: TextStyle, box: { width: number; height: 
       return;
     }
     const r = line.width / Math.abs(angle);
-    const chord = arcWidth(line.width, style.arcDeg);
+    const chord = arcBoxWidth(line.width, style.arcDeg, style.sizePx);
     const mid = style.align === 'left' ? chord / 2 : style.align === 'right' ? box.width - chord / 2 : box.width / 2;
     for (const g of line.glyphs) {
       // arc length from the line's middle to this glyph's centre, as an angle

@@ -47,7 +47,8 @@ describe('text boxes on an arc', () => {
     const r = 600 / (Math.PI / 2);
     expect(box.height - 100 * LINE_HEIGHT_EM).toBeCloseTo(r * (1 - Math.SQRT1_2), 6);
     expect(box.height - 100 * LINE_HEIGHT_EM).toBeCloseTo(111.88, 1);
-    // and the width is the chord 2 r sin 45° (540.2 px), not the straight length
-    expect(box.width).toBeCloseTo(2 * r * Math.SQRT1_2, 6);
+    // and the width is the chord 2 (r + 1.2 em) sin 45° through the glyphs' outer edges (709.9 px), not the straight length
+    expect(box.width).toBeCloseTo(2 * (r + 120) * Math.SQRT1_2, 6);
+    expect(box.width).toBeCloseTo(709.9, 1);
   });
 });

@@ -2,7 +2,7 @@ import { pointsToPixels } from '@shared/templates';
 import { createTextPlacement, type TextPlacement } from '@shared/scene';
 import type { Vec } from '@shared/geometry';
 import { resolveFontId, shippedFonts } from '@shared/text/shipped-fonts';
-import { arcSagitta, arcWidth, layoutLines } from '@shared/text/text-layout';
+import { arcBoxWidth, arcSagitta, layoutLines } from '@shared/text/text-layout';
 import { fontCache } from './render/font-cache';
 
 /** Width in px of one line at `sizePx`, without letter spacing. */
@@ -13,13 +13,13 @@ export const LINE_HEIGHT_EM = 1.2;
 
 /**
  * The text's box in template px: the widest line plus its letter spacing, one line height per
- * line; bent along an arc, the chord of the widest line and its sagitta on top (as the print lays it out).
+ * line; bent along an arc, the chord through the glyphs' outer edges and the arc's sagitta on top (as the print lays it out).
  */
 export function measureTextBox(content: string, sizePx: number, letterSpacingThousandths: number, measure: MeasureLine, arcDeg = 0): { width: number; height: number } {
   const lines = (content || ' ').split('\n');
   const spacing = (letterSpacingThousandths / 1000) * sizePx;
   const widest = Math.max(...lines.map((l) => measure(l, sizePx) + spacing * Math.max(0, [...l].length - 1)));
-  return { width: Math.max(sizePx * 0.5, arcWidth(widest, arcDeg)), height: lines.length * sizePx * LINE_HEIGHT_EM + arcSagitta(widest, arcDeg) };
+  return { width: Math.max(sizePx * 0.5, arcBoxWidth(widest, arcDeg, sizePx)), height: lines.length * sizePx * LINE_HEIGHT_EM + arcSagitta(widest, arcDeg) };
 }
 
 let measuringContext: CanvasRenderingContext2D | null = null;
