@@ -66,6 +66,8 @@ describe('a product through its stages', () => {
     await dialog.getByLabel(/Note/).fill('Same blank as the approved spring mug');
     await dialog.getByRole('button', { name: 'Move without a sample' }).click();
     await page.getByRole('list', { name: /^Ready:/ }).getByText(name).waitFor();
+    // the board shows the move before the dialog closes; the next move starts once it has
+    await expect.poll(() => dialog.count()).toBe(0);
     await browser.screenshot(page, 'products-board');
 
     // and by pointer: drag the card into the next column
@@ -78,7 +80,17 @@ describe('a product through its stages', () => {
     await expect
       .poll(async () => ((await moveDialog.count()) === 0 ? 'closed' : await moveDialog.innerText()), { timeout: 30_000 })
       .toBe('closed');
-    await page.getByRole('list', { name: /^Listed:/ }).getByText(name).waitFor({ timeout: 30_000 });
+    // On the board, and (should the board lag) what the server holds, so a failure says which is behind.
+    const listed = page.getByRole('list', { name: /^Listed:/ }).getByText(name);
+    await expect
+      .poll(async () => {
+        if (await listed.isVisible()) return 'on the board';
+        const answer = await page.request.get(`${appUrl}/api/products`);
+        const held = ((await answer.json()).products as { name: string; stage: string }[]).find((p) => p.name === name);
+        const columns = await page.getByRole('list', { name: /products?$/ }).evaluateAll((lists) => lists.map((l) => l.getAttribute('aria-label')));
+        return `board columns ${columns.join(' | ')}; server says ${held?.stage ?? 'no such product'}`;
+      }, { timeout: 30_000 })
+      .toBe('on the board');
 
     await page.getByRole('link', { name }).click();
     const history = page.getByRole('list', { name: 'Stage history, oldest first' });

@@ -1,4 +1,4 @@
-import { useEffect, useId, useState, type FormEvent } from 'react';
+import { useEffect, useId, useRef, useState, type FormEvent } from 'react';
 import type { ProductStage } from '@shared/contracts/stages';
 import { Button } from '../../../components/ui/button';
 import { Dialog } from '../../../components/ui/dialog';
@@ -25,6 +25,8 @@ export function StageMoveDialog({ target, onClose, canOverride, onMoved }: Props
   const [overriding, setOverriding] = useState(false);
   const move = useMoveProductStage();
   const { reset } = move;
+  const shown = useRef(target);
+  shown.current = target;
 
   useEffect(() => {
     setNote('');
@@ -41,7 +43,9 @@ export function StageMoveDialog({ target, onClose, canOverride, onMoved }: Props
   const submit = (event: FormEvent) => {
     event.preventDefault();
     if (noteMissing) return;
-    move.mutate({ id: target.product.id, to: target.to, note: note.trim(), override: overriding }, { onSuccess: () => { onMoved?.(target); onClose(); } });
+    const moved = target;
+    // closes only if it still shows this move: a card dropped meanwhile opens another that must stay
+    move.mutate({ id: moved.product.id, to: moved.to, note: note.trim(), override: overriding }, { onSuccess: () => { onMoved?.(moved); if (shown.current === moved) onClose(); } });
   };
 
   return (
