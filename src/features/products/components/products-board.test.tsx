@@ -93,6 +93,32 @@ describe('products board', () => {
     expect(calls.find((c) => c.path.endsWith('/stage/override'))?.body).toEqual({ to: 'ready', note: 'Same blank as the approved spring mug' });
   });
 
+  it('moves a card dropped on the next column, and ignores a drop where the rules allow no move', async () => {
+    const ready = { ...mug, stage: 'ready' as const };
+    const { calls } = fakeApi({
+      'GET /api/auth/csrf': { body: { csrfToken: 'token-1' } },
+      [`POST /api/products/${mug.id}/stage`]: moved('ready', 'listed'),
+    });
+    renderPage(<ProductsBoard products={[ready]} canMove canOverride={false} />);
+    const held = new Map<string, string>();
+    const dataTransfer = { setData: (k: string, v: string) => held.set(k, v), getData: (k: string) => held.get(k) ?? '', effectAllowed: 'all', dropEffect: 'none' };
+    const card = screen.getByText('Puffin Picnic mug').closest('li')!;
+    const column = (label: string) => screen.getByRole('heading', { name: new RegExp(`^${label}`) }).closest('section')!;
+    fireEvent.dragStart(card, { dataTransfer });
+    // dropped back on its own column: nothing to move, no prompt
+    fireEvent.dragOver(column('Ready'), { dataTransfer });
+    fireEvent.drop(column('Ready'), { dataTransfer });
+    expect(screen.queryByText(/Move “Puffin Picnic mug” to/)).toBeNull();
+    fireEvent.dragStart(card, { dataTransfer });
+    fireEvent.dragOver(column('Listed'), { dataTransfer });
+    fireEvent.drop(column('Listed'), { dataTransfer });
+    const dialog = await screen.findByRole('dialog', undefined, slow);
+    expect(dialog.textContent).toContain('Move “Puffin Picnic mug” to Listed');
+    fireEvent.click(within(dialog).getByRole('button', { name: 'Move to Listed' }));
+    await waitFor(() => expect(calls.find((c) => c.path.endsWith('/stage'))?.body).toEqual({ to: 'listed', note: '' }), slow);
+    await waitFor(() => expect(screen.queryByRole('dialog')).toBeNull(), slow);
+  });
+
   it('hides the move controls from someone who may not move products, and does not let their cards drag', () => {
     fakeApi({});
     renderPage(<ProductsBoard products={[mug]} canMove={false} canOverride={false} />);
