@@ -7,29 +7,12 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { mug11oz } from '../../../shared/templates/built-in-templates';
 import { createTestApp, signUpOwner, type ApiClient, type TestApp } from '../support/test-app';
 import { smallCardPsd } from '../support/psd-files';
-import { waitForImport } from '../support/wait-for';
+import { asBuffer, waitForExport, waitForImport } from '../support/wait-for';
 
 let t: TestApp;
 let owner: ApiClient;
 let productId: string;
 const variantIds: string[] = [];
-
-async function waitForExport(client: ApiClient, id: string, timeoutMs = 120_000) {
-  const deadline = Date.now() + timeoutMs;
-  for (;;) {
-    const res = await client.get(`/api/exports/${id}`).expect(200);
-    if (res.body.status === 'done' || res.body.status === 'failed') return res.body;
-    if (Date.now() > deadline) throw new Error(`export ${id} still ${res.body.status} (${res.body.progress})`);
-    await new Promise((r) => setTimeout(r, 250));
-  }
-}
-
-const asBuffer = (req: ReturnType<ApiClient['get']>) =>
-  req.buffer(true).parse((r, cb) => {
-    const chunks: Buffer[] = [];
-    r.on('data', (c: Buffer) => chunks.push(c));
-    r.on('end', () => cb(null, Buffer.concat(chunks)));
-  });
 
 beforeAll(async () => {
   t = await createTestApp({}, { workers: true });
@@ -68,7 +51,7 @@ describe('export bundle with product variants', () => {
   it('names the print file each variant takes by SKU, with previews on each variant’s own blank', async () => {
     const started = await owner.post(`/api/products/${productId}/exports`, { kind: 'bundle', paper: 'a4' });
     expect(started.status).toBe(202);
-    const done = await waitForExport(owner, started.body.id);
+    const done = await waitForExport(owner, started.body.id, 120_000);
     expect(done.status).toBe('done');
     const zip = (await asBuffer(owner.get(`/api/exports/${started.body.id}/download?file=bundle.zip`)).expect(200)).body as Buffer;
     const dir = mkdtempSync(path.join(tmpdir(), 'variants-'));

@@ -7,7 +7,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { mug11oz } from '../../../shared/templates/built-in-templates';
 import { addMember, createTestApp, signUpOwner, type ApiClient, type TestApp } from '../support/test-app';
 import { smallCardPsd } from '../support/psd-files';
-import { waitForImport } from '../support/wait-for';
+import { asBuffer, waitForExport, waitForImport } from '../support/wait-for';
 
 let t: TestApp;
 let owner: ApiClient;
@@ -23,24 +23,7 @@ const placement = (m: Motif, id: string, x: number, y: number, extra: object = {
   x, y, scale: 10, rotationDeg: 0, flipX: false, flipY: false, opacity: 1, blendMode: 'normal', locked: false, hidden: false, ...extra,
 });
 
-async function waitForExport(client: ApiClient, id: string, timeoutMs = 60_000) {
-  const deadline = Date.now() + timeoutMs;
-  for (;;) {
-    const res = await client.get(`/api/exports/${id}`).expect(200);
-    if (res.body.status === 'done' || res.body.status === 'failed') return res.body;
-    if (Date.now() > deadline) throw new Error(`export ${id} still ${res.body.status} (${res.body.progress})`);
-    await new Promise((r) => setTimeout(r, 200));
-  }
-}
-
 const binary = (res: { body: unknown }) => res.body as Buffer;
-const asBuffer = (req: ReturnType<ApiClient['get']>) =>
-  req.buffer(true).parse((r, cb) => {
-    const chunks: Buffer[] = [];
-    r.on('data', (c: Buffer) => chunks.push(c));
-    r.on('end', () => cb(null, Buffer.concat(chunks)));
-  });
-
 beforeAll(async () => {
   t = await createTestApp({}, { workers: true });
   owner = (await signUpOwner(t.app, 'Saltmarsh Studio')).client;

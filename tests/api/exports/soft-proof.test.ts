@@ -3,7 +3,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { mug11oz } from '../../../shared/templates/built-in-templates';
 import { createTestApp, signUpOwner, type ApiClient, type TestApp } from '../support/test-app';
 import { smallCardPsd } from '../support/psd-files';
-import { waitForImport } from '../support/wait-for';
+import { asBuffer, waitForImport } from '../support/wait-for';
 
 let t: TestApp;
 let owner: ApiClient;
@@ -11,13 +11,6 @@ let productId: string;
 
 // A saturated blue outside what coated offset paper prints (from memory), so the proof moves it.
 const KITE: [number, number, number, number] = [12, 120, 220, 255];
-
-const asBuffer = (req: ReturnType<ApiClient['get']>) =>
-  req.buffer(true).parse((r, cb) => {
-    const chunks: Buffer[] = [];
-    r.on('data', (c: Buffer) => chunks.push(c));
-    r.on('end', () => cb(null, Buffer.concat(chunks)));
-  });
 
 beforeAll(async () => {
   t = await createTestApp({}, { workers: true });
