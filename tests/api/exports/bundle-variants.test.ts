@@ -6,8 +6,8 @@ import { PNG } from 'pngjs';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { mug11oz } from '../../../shared/templates/built-in-templates';
 import { createTestApp, signUpOwner, type ApiClient, type TestApp } from '../support/test-app';
-import { smallCardPsd } from '../support/psd-files';
-import { asBuffer, waitForExport, waitForImport } from '../support/wait-for';
+import { kiteMug } from '../support/kite-mug';
+import { asBuffer, waitForExport } from '../support/wait-for';
 
 let t: TestApp;
 let owner: ApiClient;
@@ -17,16 +17,8 @@ const variantIds: string[] = [];
 beforeAll(async () => {
   t = await createTestApp({}, { workers: true });
   owner = (await signUpOwner(t.app, 'Saltmarsh Studio')).client;
-  const upload = await owner.upload('/api/originals', smallCardPsd({ kiteColour: [12, 120, 220, 255] }), 'puffin-picnic.psd');
-  const kite = ((await waitForImport(owner, upload.body.id)).motifs as { id: string; name: string; width: number; height: number; version: number }[]).find((m) => m.name === 'Kite')!;
-  const created = await owner.post('/api/products', { name: 'Coastal Spring mug', templateId: mug11oz.id });
-  productId = created.body.id;
   // only the blue kite is printed, so any red in a preview comes from the blank's handle
-  const layout = {
-    version: 2, mirror: false,
-    placements: [{ type: 'motif', id: 'kite', motifId: kite.id, version: kite.version, naturalWidth: kite.width, naturalHeight: kite.height, x: 1275, y: 525, scale: 10, rotationDeg: 0, flipX: false, flipY: false, opacity: 1, blendMode: 'normal', locked: false, hidden: false }],
-  };
-  expect((await owner.patch(`/api/products/${productId}`, { revision: created.body.revision, layout })).status).toBe(200);
+  productId = (await kiteMug(owner, [12, 120, 220, 255])).productId;
   for (const v of [
     { name: 'Red handle', sku: 'SM-CS-MUG-RED', options: { handleColour: '#c0392b' } },
     { name: 'Black handle', sku: 'SM-CS-MUG-BLK', options: { templateVariantId: 'black-handle' } },

@@ -6,37 +6,25 @@ import { PNG } from 'pngjs';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { mug11oz } from '../../../shared/templates/built-in-templates';
 import { addMember, createTestApp, signUpOwner, type ApiClient, type TestApp } from '../support/test-app';
-import { smallCardPsd } from '../support/psd-files';
-import { asBuffer, waitForExport, waitForImport } from '../support/wait-for';
+import { kiteMug, motifPlacement, type ImportedMotif } from '../support/kite-mug';
+import { asBuffer, waitForExport } from '../support/wait-for';
 
 let t: TestApp;
 let owner: ApiClient;
 let productId: string;
-type Motif = { id: string; name: string; width: number; height: number; version: number };
-let kite: Motif;
+let kite: ImportedMotif;
 
 // The kite's sail: a saturated blue, well outside what coated offset paper prints (from memory).
 const KITE: [number, number, number, number] = [12, 120, 220, 255];
-
-const placement = (m: Motif, id: string, x: number, y: number, extra: object = {}) => ({
-  type: 'motif', id, motifId: m.id, version: m.version, naturalWidth: m.width, naturalHeight: m.height,
-  x, y, scale: 10, rotationDeg: 0, flipX: false, flipY: false, opacity: 1, blendMode: 'normal', locked: false, hidden: false, ...extra,
-});
 
 const binary = (res: { body: unknown }) => res.body as Buffer;
 beforeAll(async () => {
   t = await createTestApp({}, { workers: true });
   owner = (await signUpOwner(t.app, 'Saltmarsh Studio')).client;
-  const upload = await owner.upload('/api/originals', smallCardPsd({ kiteColour: KITE }), 'puffin-picnic.psd');
-  const motifs = (await waitForImport(owner, upload.body.id)).motifs as Motif[];
-  kite = motifs.find((m) => m.name === 'Kite')!;
-  const puffins = motifs.find((m) => m.name === 'Puffins')!;
-  const created = await owner.post('/api/products', { name: 'Coastal Spring mug', templateId: mug11oz.id });
-  productId = created.body.id;
   // The kite sits on the front centre (x 1275); the puffins to its left, multiplied.
-  const layout = { version: 2, mirror: false, placements: [placement(kite, 'kite', 1275, 525), placement(puffins, 'puffins', 700, 525, { blendMode: 'multiply', opacity: 0.8 })] };
-  const saved = await owner.patch(`/api/products/${productId}`, { revision: created.body.revision, layout });
-  expect(saved.status).toBe(200);
+  const made = await kiteMug(owner, KITE, (motifs) => [motifPlacement(motifs.find((m) => m.name === 'Puffins')!, 'puffins', 700, 525, { blendMode: 'multiply', opacity: 0.8 })]);
+  productId = made.productId;
+  kite = made.kite;
 }, 60_000);
 afterAll(() => t.close());
 

@@ -1,9 +1,8 @@
 import { PNG } from 'pngjs';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { mug11oz } from '../../../shared/templates/built-in-templates';
 import { createTestApp, signUpOwner, type ApiClient, type TestApp } from '../support/test-app';
-import { smallCardPsd } from '../support/psd-files';
-import { asBuffer, waitForImport } from '../support/wait-for';
+import { kiteMug } from '../support/kite-mug';
+import { asBuffer } from '../support/wait-for';
 
 let t: TestApp;
 let owner: ApiClient;
@@ -15,16 +14,7 @@ const KITE: [number, number, number, number] = [12, 120, 220, 255];
 beforeAll(async () => {
   t = await createTestApp({}, { workers: true });
   owner = (await signUpOwner(t.app, 'Saltmarsh Studio')).client;
-  const upload = await owner.upload('/api/originals', smallCardPsd({ kiteColour: KITE }), 'puffin-picnic.psd');
-  const motifs = (await waitForImport(owner, upload.body.id)).motifs as Array<{ id: string; name: string; width: number; height: number; version: number }>;
-  const kite = motifs.find((m) => m.name === 'Kite')!;
-  const created = await owner.post('/api/products', { name: 'Coastal Spring mug', templateId: mug11oz.id });
-  productId = created.body.id;
-  const layout = {
-    version: 2, mirror: false,
-    placements: [{ type: 'motif', id: 'kite', motifId: kite.id, version: kite.version, naturalWidth: kite.width, naturalHeight: kite.height, x: 1275, y: 525, scale: 10, rotationDeg: 0, flipX: false, flipY: false, opacity: 1, blendMode: 'normal', locked: false, hidden: false }],
-  };
-  expect((await owner.patch(`/api/products/${productId}`, { revision: created.body.revision, layout })).status).toBe(200);
+  productId = (await kiteMug(owner, KITE)).productId;
 }, 60_000);
 afterAll(() => t.close());
 
