@@ -24,6 +24,17 @@ afterAll(async () => {
 });
 
 const across = () => page.getByLabel('Across').inputValue();
+// The inspector shows a click, drag or undo on its next render: the value once two reads agree.
+async function settledAcross(): Promise<string> {
+  let last = await across();
+  for (let i = 0; i < 20; i++) {
+    await page.waitForTimeout(150);
+    const now = await across();
+    if (now === last) return now;
+    last = now;
+  }
+  return last;
+}
 const saved = () => page.getByTestId('save-status').filter({ hasText: /^Saved · revision \d+$/ }).waitFor({ timeout: 10_000 });
 
 describe('composing a mug wrap from the card’s motifs', () => {
@@ -61,14 +72,14 @@ describe('composing a mug wrap from the card’s motifs', () => {
     const moved = (await canvas.boundingBox())!;
     const left = { x: moved.x + box.width * 0.3, y: moved.y + box.height * 0.5 };
     await page.mouse.click(left.x, left.y);
-    const before = await across();
+    const before = await settledAcross();
     await page.mouse.move(left.x, left.y);
     await page.mouse.down();
     for (let i = 1; i <= 8; i++) await page.mouse.move(left.x + i * 10, left.y + i * 3);
     await page.mouse.up();
-    expect(await across()).not.toBe(before);
+    await expect.poll(across).not.toBe(before);
     await page.keyboard.press('Control+z');
-    expect(await across()).toBe(before);
+    await expect.poll(across).toBe(before);
 
     // Recolour the right-hand puffin.
     await page.mouse.click(box.x + box.width * 0.7, box.y + box.height * 0.5);
@@ -85,7 +96,7 @@ describe('composing a mug wrap from the card’s motifs', () => {
     const recoloured = placements.filter((p) => p.type !== 'text' && p.recolour.kind === 'hue');
     expect(recoloured).toHaveLength(1);
     await page.mouse.click(left.x, left.y);
-    expect(await across()).toBe(before);
+    await expect.poll(across).toBe(before);
     // the save recorded which motifs (and versions) the product uses
     expect(product.motifs.map((m) => m.name).sort()).toEqual(['Puffin Red Jumper', 'Puffin Teal Jumper', 'Sandwiches']);
   });
