@@ -41,6 +41,8 @@ export const productsListSchema = z.object({ products: z.array(productSummarySch
 export const productMotifUseSchema = z.object({
   motifId: z.string(),
   name: z.string(),
+  // the original it was cut from, so the editor can offer that original first
+  originalId: z.string(),
   usedVersion: z.number(),
   currentVersion: z.number(),
   placementIds: z.array(z.string()),

@@ -80,7 +80,7 @@ export function createProductsRepository(db: Database) {
     async motifsOfStudio(studioId: string, ids: string[]) {
       if (ids.length === 0) return [];
       return db
-        .select({ id: motifs.id, name: motifs.name, currentVersion: motifs.currentVersion, rightsStatus: motifs.rightsStatus, archived: motifs.archived })
+        .select({ id: motifs.id, name: motifs.name, originalId: motifs.originalId, currentVersion: motifs.currentVersion, rightsStatus: motifs.rightsStatus, archived: motifs.archived })
         .from(motifs)
         .where(and(eq(motifs.studioId, studioId), inArray(motifs.id, ids)));
     },

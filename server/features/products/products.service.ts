@@ -58,7 +58,7 @@ export function createProductsService(repo: ProductsRepository, templates: Templ
     for (const u of uses) {
       const m = known.get(u.motifId);
       if (!m) continue;
-      const entry = byMotif.get(u.motifId) ?? { motifId: m.id, name: m.name, usedVersion: u.version, currentVersion: m.currentVersion, placementIds: [], rightsStatus: m.rightsStatus, archived: m.archived };
+      const entry = byMotif.get(u.motifId) ?? { motifId: m.id, name: m.name, originalId: m.originalId, usedVersion: u.version, currentVersion: m.currentVersion, placementIds: [], rightsStatus: m.rightsStatus, archived: m.archived };
       entry.placementIds.push(u.placementId);
       entry.usedVersion = Math.min(entry.usedVersion, u.version);
       byMotif.set(u.motifId, entry);

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { placementBounds } from '@shared/scene';
 import { mug11oz, templateGeometry } from '@shared/templates';
 import { rectContains } from '@shared/geometry';
-import { frontCentre, placementForMotif, placementsAsInOriginal } from './place-motifs';
+import { frontCentre, placementForMotif, placementsAsInOriginal, usualOriginalOf } from './place-motifs';
 import { ppiLevel } from './placement-measures';
 
 const g = templateGeometry(mug11oz);
@@ -43,5 +43,17 @@ describe('print resolution warning', () => {
     expect(ppiLevel(300, 300)).toBe('fine');
     expect(ppiLevel(240, 300)).toBe('below-template');
     expect(ppiLevel(149, 300)).toBe('too-low');
+  });
+});
+
+describe('the original offered first in the tray', () => {
+  it('is the one most placements were cut from', () => {
+    expect(usualOriginalOf([
+      { originalId: 'lanterns', placementIds: ['a'] },
+      { originalId: 'puffins', placementIds: ['b', 'c'] },
+      { originalId: 'lanterns', placementIds: [] },
+    ])).toBe('puffins');
+    expect(usualOriginalOf([{ originalId: 'puffins', placementIds: ['a'] }, { originalId: 'lanterns', placementIds: ['b'] }])).toBe('puffins');
+    expect(usualOriginalOf([])).toBeUndefined();
   });
 });

@@ -47,3 +47,12 @@ export function placementsAsInOriginal(motifs: readonly OriginalMotif[], g: Temp
     }),
   );
 }
+
+/** The original that most of a product's placements were cut from (ties: the first named), if any. */
+export function usualOriginalOf(uses: readonly { originalId: string; placementIds: readonly string[] }[]): string | undefined {
+  const counts = new Map<string, number>();
+  for (const u of uses) counts.set(u.originalId, (counts.get(u.originalId) ?? 0) + u.placementIds.length);
+  let best: string | undefined;
+  for (const [id, n] of counts) if (best === undefined || n > counts.get(best)!) best = id;
+  return best;
+}

@@ -13,10 +13,12 @@ import { writeMotifDrag } from './tray-drag';
 type MotifTrayProps = {
   onPlace: (motif: PlaceableMotif) => void;
   onPlaceOriginal: (motifs: OriginalMotif[]) => void;
+  /** The original most of the product's placements come from, offered first. */
+  usualOriginalId?: string;
 };
 
 /** The studio's motifs beside the canvas: drag one onto the strip, or press Enter to place it at the front. */
-export function MotifTray({ onPlace, onPlaceOriginal }: MotifTrayProps) {
+export function MotifTray({ onPlace, onPlaceOriginal, usualOriginalId }: MotifTrayProps) {
   const [q, setQ] = useState('');
   const motifs = useTrayMotifs(q);
   const list = motifs.data?.motifs ?? [];
@@ -40,7 +42,7 @@ export function MotifTray({ onPlace, onPlaceOriginal }: MotifTrayProps) {
           className="mt-1 block w-full rounded-md border border-sand bg-white px-2 py-1.5 text-base font-normal"
         />
       </label>
-      <PlaceAsInOriginal onPlaceOriginal={onPlaceOriginal} />
+      <PlaceAsInOriginal onPlaceOriginal={onPlaceOriginal} usualOriginalId={usualOriginalId} />
       <p className="text-xs text-ink-soft">Drag a motif onto the product, or pick it and press Enter to place it at the front.</p>
       <div className="min-h-0 flex-1 overflow-y-auto">
         {motifs.isPending && <Spinner />}
@@ -69,7 +71,7 @@ export function MotifTray({ onPlace, onPlaceOriginal }: MotifTrayProps) {
   );
 }
 
-function PlaceAsInOriginal({ onPlaceOriginal }: Pick<MotifTrayProps, 'onPlaceOriginal'>) {
+function PlaceAsInOriginal({ onPlaceOriginal, usualOriginalId }: Pick<MotifTrayProps, 'onPlaceOriginal' | 'usualOriginalId'>) {
   const originals = useTrayOriginals();
   const queryClient = useQueryClient();
   const [picked, setPicked] = useState('');
@@ -77,7 +79,7 @@ function PlaceAsInOriginal({ onPlaceOriginal }: Pick<MotifTrayProps, 'onPlaceOri
   const [problem, setProblem] = useState<string | null>(null);
   const ready = (originals.data?.originals ?? []).filter((o) => o.status === 'ready' && o.motifCount > 0);
   if (ready.length === 0) return null;
-  const chosen = picked || ready[0].id;
+  const chosen = picked || (ready.find((o) => o.id === usualOriginalId) ?? ready[0]).id;
 
   const place = async () => {
     setBusy(true);

@@ -7,7 +7,7 @@ import { useGuideImage } from '../api/get-guide-image';
 import { Autosaver } from '../autosave';
 import { useSettledRevision } from '../preflight/use-settled-revision';
 import { ProductEditor } from '../editor';
-import { frontCentre, placementForMotif, placementsAsInOriginal, type OriginalMotif, type PlaceableMotif } from '../place-motifs';
+import { frontCentre, placementForMotif, placementsAsInOriginal, usualOriginalOf, type OriginalMotif, type PlaceableMotif } from '../place-motifs';
 import type { LoadThumb } from '../render/image-cache';
 import { EditorCanvas } from './editor-canvas';
 import { EditorToolbar } from './editor-toolbar';
@@ -104,7 +104,7 @@ export function ProductEditorView({ product, save, reload, loadThumb }: ProductE
       </div>
       {/* always present, so the grid's rows stay toolbar / notice / body even with no notice */}
       <div className="col-span-3"><NewerVersions editor={editor} uses={product.motifs} /></div>
-      <MotifTray onPlace={(m) => place(m)} onPlaceOriginal={placeOriginal} />
+      <MotifTray onPlace={(m) => place(m)} onPlaceOriginal={placeOriginal} usualOriginalId={usualOriginalOf(product.motifs)} />
       <div ref={canvasBox} className="relative min-h-0">
         <EditorCanvas editor={editor} onDropMotif={place} loadThumb={loadThumb} />
         {softProof.on && <SoftProofNotice view={softProof} unsaved={saveStatus.kind !== 'saved' || savedRevision !== saveStatus.revision} />}

@@ -34,7 +34,7 @@ const product: ProductDetail = {
   notes: 'Navy handle sells best',
   template: mug11oz,
   layout: { version: 2, mirror: false, placements: [] },
-  motifs: [{ motifId: 'f1', name: 'Puffin with kite', usedVersion: 1, currentVersion: 2, placementIds: ['p1'], rightsStatus: 'own_work', archived: false }],
+  motifs: [{ motifId: 'f1', name: 'Puffin with kite', originalId: 'o1', usedVersion: 1, currentVersion: 2, placementIds: ['p1'], rightsStatus: 'own_work', archived: false }],
 };
 
 const history = {
