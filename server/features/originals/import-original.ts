@@ -10,6 +10,7 @@ import { motifs, motifVersions, originals, type ImportReport } from '../../db/sc
 import type { ObjectStorage } from '../../lib/storage';
 import { matchIncomingMotifs, type KnownMotif } from './motif-matching';
 import { createMotifUploads, type MotifUploads } from './motif-uploads';
+import type { ClaimedEarlyUnpack, EarlyUnpacks } from './early-unpacks';
 import { createOriginalsCleanup } from './originals-cleanup';
 import type { OriginalRow, OriginalsRepository } from './originals.repository';
 import type { UnpackedMotif, UnpackProgress, UnpackResult } from './unpack/unpack-result';
@@ -20,12 +21,16 @@ export type RunUnpack = (
   onProgress?: (p: UnpackProgress) => void,
   // each motif whose files are written, before the result
   onMotif?: (m: UnpackedMotif) => void,
+  // stops the unpack (an AbortError, not an UnpackError)
+  signal?: AbortSignal,
 ) => Promise<UnpackResult>;
 
 // claim: the row claimed and a temp dir made; storage: what is left to store after the unpack
-// (most motifs go up while later layers decode); storedDuringUnpack: motifs stored by then.
+// (most motifs go up while later layers decode); storedDuringUnpack: motifs stored by then;
+// unpackedEarly: the upload's local file was unpacked while it was being stored (no download,
+// and unpackMs is only what was left of that unpack when the job claimed it).
 export type ImportPhaseTimings = {
-  claimMs: number; downloadMs: number; unpackMs: number; storageMs: number; dbMs: number;
+  claimMs: number; downloadMs: number; unpackMs: number; storageMs: number; dbMs: number; unpackedEarly: boolean;
   storedDuringUnpack: number; stored: number; unpack?: UnpackResult['timings']; childPeakRssBytes?: number;
 };
 
@@ -37,6 +42,8 @@ type Deps = {
   repo: OriginalsRepository;
   storage: ObjectStorage;
   runUnpack: RunUnpack;
+  // uploads received by this process, already unpacking (see early-unpacks.ts)
+  earlyUnpacks?: Pick<EarlyUnpacks, 'take'>;
   tmpRoot?: string;
   // Benches read where the time went; the product ignores it.
   onTimings?: (timings: ImportPhaseTimings) => void;
@@ -60,7 +67,7 @@ function throttled(fn: (phase: UnpackProgress['phase'], percent: number) => void
   };
 }
 
-export function createOriginalImporter({ db, repo, storage, runUnpack, tmpRoot, onTimings }: Deps) {
+export function createOriginalImporter({ db, repo, storage, runUnpack, earlyUnpacks, tmpRoot, onTimings }: Deps) {
   const cleanup = createOriginalsCleanup(db, storage);
   async function knownMotifsOf(originalId: string): Promise<KnownMotif[]> {
     const rows = await repo.motifsOf(originalId);
@@ -113,8 +120,10 @@ export function createOriginalImporter({ db, repo, storage, runUnpack, tmpRoot, 
     };
     const original = await repo.claimForImport(originalId);
     if (!original) return 'skipped';
-    const workDir = await mkdtemp(path.join(tmpRoot ?? os.tmpdir(), 'motifold-import-'));
-    const outDir = path.join(workDir, 'out');
+    // Only the first delivery finds it; a retry or a duplicate unpacks the stored file.
+    const early = earlyUnpacks?.take(original) ?? null;
+    const workDir = early ? null : await mkdtemp(path.join(tmpRoot ?? os.tmpdir(), 'motifold-import-'));
+    const outDir = early ? early.outDir : path.join(workDir!, 'out');
     const claimMs = lap();
     const progress = throttled((phase, percent) => {
       void repo.setProgress(originalId, phase, (UNPACK_SHARE * Math.min(100, Math.max(0, percent))) / 100).catch(() => {});
@@ -124,13 +133,18 @@ export function createOriginalImporter({ db, repo, storage, runUnpack, tmpRoot, 
       studioHasPixels: (hash) => studioHasPixels(original.studioId, hash),
     });
     try {
-      const filePath = path.join(workDir, 'original');
-      const [stored] = await Promise.all([storage.get(original.storageKey), mkdir(outDir)]);
-      await pipeline(stored.body, createWriteStream(filePath));
-      const downloadMs = lap();
       // read while the file unpacks; awaited (and its failure seen) after the unpack
       const previousMotifs = settledLater(original.previousOriginalId ? knownMotifsOf(original.previousOriginalId) : Promise.resolve([]));
-      const result = await runUnpack({ filePath, outDir, cut: original.cut, originalName: original.name }, progress, (m) => uploads.early(m));
+      let downloadMs = 0;
+      let result: UnpackResult;
+      if (early) {
+        result = await early.follow(progress, (m) => uploads.early(m));
+      } else {
+        const filePath = path.join(workDir!, 'original');
+        await downloadOriginal(original.storageKey, filePath, outDir);
+        downloadMs = lap();
+        result = await runUnpack({ filePath, outDir, cut: original.cut, originalName: original.name }, progress, (m) => uploads.early(m));
+      }
       const unpackMs = lap();
       const storedDuringUnpack = uploads.completed;
 
@@ -168,7 +182,7 @@ export function createOriginalImporter({ db, repo, storage, runUnpack, tmpRoot, 
 
       const committed = await commitImport(db, { original, result, decisions, firstNewIndex, pngBytes, report });
       onTimings?.({
-        claimMs, downloadMs, unpackMs, storageMs, dbMs: lap(), storedDuringUnpack, stored: toStore.length,
+        claimMs, downloadMs, unpackMs, storageMs, dbMs: lap(), unpackedEarly: early !== null, storedDuringUnpack, stored: toStore.length,
         unpack: result.timings, childPeakRssBytes: result.resources?.peakRssBytes,
       });
       if (!committed) await discardUnreferenced(original, uploads).catch(() => {});
@@ -188,9 +202,19 @@ export function createOriginalImporter({ db, repo, storage, runUnpack, tmpRoot, 
         .catch(() => {});
       throw err;
     } finally {
-      await rm(workDir, { recursive: true, force: true });
+      await removeWork(early, workDir);
     }
   };
+
+  async function downloadOriginal(key: string, filePath: string, outDir: string): Promise<void> {
+    const [stored] = await Promise.all([storage.get(key), mkdir(outDir)]);
+    await pipeline(stored.body, createWriteStream(filePath));
+  }
+}
+
+async function removeWork(early: ClaimedEarlyUnpack | null, workDir: string | null): Promise<void> {
+  if (early) await early.dispose();
+  if (workDir) await rm(workDir, { recursive: true, force: true });
 }
 
 // A promise awaited later: its rejection is seen then, not reported as unhandled meanwhile.
