@@ -56,6 +56,8 @@ type Entry = EarlyUnpackInput & {
   abort: AbortController;
   expiry: NodeJS.Timeout | null;
   disposed: Promise<void> | null;
+  // the upload's file, removed once the unpack and the upload to storage are both done with it
+  fileGone: Promise<void> | null;
 };
 
 const DEFAULT_UNCLAIMED_MS = 10 * 60_000;
@@ -71,7 +73,7 @@ export function createEarlyUnpacks({ runUnpack, tmpRoot, maxRunning, unclaimedMs
       if (entry.expiry) clearTimeout(entry.expiry);
       entry.abort.abort();
       await entry.result.catch(() => undefined);
-      await rm(entry.workDir, { recursive: true, force: true });
+      await Promise.all([rm(entry.workDir, { recursive: true, force: true }), entry.fileGone]);
       live.delete(entry);
     })();
     return entry.disposed;
@@ -97,13 +99,14 @@ export function createEarlyUnpacks({ runUnpack, tmpRoot, maxRunning, unclaimedMs
         running--;
         return null;
       }
-      let holders = 2;
-      const release = () => {
-        if (--holders === 0) void rm(input.filePath, { force: true });
-      };
       const entry: Entry = {
         ...input, workDir, outDir: path.join(workDir, 'out'), fileSha256: null, byteSize: null, motifs: [], lastProgress: null,
-        onProgress: null, onMotif: null, result: Promise.resolve(null as unknown as UnpackResult), abort: new AbortController(), expiry: null, disposed: null,
+        onProgress: null, onMotif: null, result: Promise.resolve(null as unknown as UnpackResult), abort: new AbortController(),
+        expiry: null, disposed: null, fileGone: null,
+      };
+      let holders = 2;
+      const release = () => {
+        if (--holders === 0) entry.fileGone = rm(input.filePath, { force: true }).catch(() => undefined);
       };
       entry.result = runUnpack(
         { filePath: input.filePath, outDir: entry.outDir, cut: input.cut, originalName: input.originalName },
