@@ -2,6 +2,7 @@ import { copyFile, stat } from 'node:fs/promises';
 import path from 'node:path';
 import { parseConfig } from '../../server/config';
 import { memberships, studios, users } from '../../server/db/schema/index';
+import { createEarlyUnpacks } from '../../server/features/originals/early-unpacks';
 import { createOriginalImporter, type ImportPhaseTimings } from '../../server/features/originals/import-original';
 import { createOriginalsCleanup } from '../../server/features/originals/originals-cleanup';
 import { createOriginalsRepository } from '../../server/features/originals/originals.repository';
@@ -11,25 +12,36 @@ import { openRuntime } from '../../server/runtime';
 import type { UnpackBenchRow } from './import-bench';
 import { generateBenchPsds } from './psd-fixtures';
 
-export type ImportBenchRow = { file: string; wallMs: number; uploadMs: number; timings: ImportPhaseTimings; parentPeakRssMb: number; vsImageMagick: number | null; vsFloor: number };
+export type ImportBenchRow = { file: string; workerInProcess: boolean; wallMs: number; uploadMs: number; timings: ImportPhaseTimings; parentPeakRssMb: number; vsImageMagick: number | null; vsFloor: number };
 
 // The whole import a user waits for — upload to storage, queue row, unpack in the child, S3 puts
-// of masters and thumbnails, the DB commit — against the peers timed in the same run.
+// of masters and thumbnails, the DB commit — against the peers timed in the same run. Measured
+// as `npm start` runs it (the worker in the web process, so the upload unpacks while it is
+// stored), then with the worker in a process of its own (`npm run worker`: the job downloads the
+// stored file first), both with a pre-started child.
 export async function benchImportEndToEnd(peers: UnpackBenchRow[], log: (line: string) => void = console.log): Promise<ImportBenchRow[]> {
   const runtime = await openRuntime(parseConfig({ ...process.env, NODE_ENV: 'test' }));
   const rows: ImportBenchRow[] = [];
+  const earlyUnpacks = createEarlyUnpacks({ runUnpack, maxRunning: 1 });
   try {
     const db = runtime.db.db;
-    const [studio] = await db.insert(studios).values({ name: `Bench studio ${Date.now()}` }).returning();
     const [user] = await db.insert(users).values({ name: 'Bench', email: `bench-${Date.now()}@saltmarsh.test`, passwordHash: 'x' }).returning();
-    await db.insert(memberships).values({ studioId: studio.id, userId: user.id, role: 'owner' });
+    // one studio per way of running, so the second finds none of the first's pixels stored
+    const studioFor = new Map<boolean, string>();
+    for (const inProcess of [true, false]) {
+      const [studio] = await db.insert(studios).values({ name: `Bench studio ${inProcess ? 'in-process' : 'worker'} ${Date.now()}` }).returning();
+      await db.insert(memberships).values({ studioId: studio.id, userId: user.id, role: 'owner' });
+      studioFor.set(inProcess, studio.id);
+    }
     const repo = createOriginalsRepository(db);
-    const service = createOriginalsService({ repo, storage: runtime.storage, queue: { enqueueImport: async () => {} }, cleanup: createOriginalsCleanup(db, runtime.storage) });
     let timings: ImportPhaseTimings | undefined;
-    const importOriginal = createOriginalImporter({ db, repo, storage: runtime.storage, runUnpack, onTimings: (t) => (timings = t) });
     // A worker keeps one child loaded between jobs, as `npm run worker` does.
     prewarmUnpackWorker(true);
-    for (const psd of await generateBenchPsds()) {
+    const psds = await generateBenchPsds();
+    for (const [workerInProcess, psd] of [true, false].flatMap((inProcess) => psds.map((p) => [inProcess, p] as const))) {
+      const shared = workerInProcess ? { earlyUnpacks } : {};
+      const service = createOriginalsService({ repo, storage: runtime.storage, queue: { enqueueImport: async () => {} }, cleanup: createOriginalsCleanup(db, runtime.storage), ...shared });
+      const importOriginal = createOriginalImporter({ db, repo, storage: runtime.storage, runUnpack, onTimings: (t) => (timings = t), ...shared });
       await new Promise((r) => setTimeout(r, 2500));
       const peer = peers.find((p) => p.file === psd.name);
       let parentPeak = process.memoryUsage().rss;
@@ -37,7 +49,7 @@ export async function benchImportEndToEnd(peers: UnpackBenchRow[], log: (line: s
       const started = performance.now();
       const upload = path.join(path.dirname(psd.file), `${psd.name}.upload`);
       await copyFile(psd.file, upload);
-      const { id } = await service.upload({ studioId: studio.id, userId: user.id, filePath: upload, fileName: path.basename(psd.file), byteSize: (await stat(upload)).size, cut: 'layers' });
+      const { id } = await service.upload({ studioId: studioFor.get(workerInProcess)!, userId: user.id, filePath: upload, fileName: path.basename(psd.file), byteSize: (await stat(upload)).size, cut: 'layers' });
       const uploadMs = performance.now() - started;
       const outcome = await importOriginal(id);
       const wallMs = Math.round(performance.now() - started);
@@ -45,6 +57,7 @@ export async function benchImportEndToEnd(peers: UnpackBenchRow[], log: (line: s
       if (outcome !== 'imported' || !timings) throw new Error(`bench import of ${psd.name} ended ${outcome}`);
       const row: ImportBenchRow = {
         file: psd.name,
+        workerInProcess,
         wallMs,
         uploadMs: Math.round(uploadMs),
         timings,
@@ -54,13 +67,15 @@ export async function benchImportEndToEnd(peers: UnpackBenchRow[], log: (line: s
       };
       rows.push(row);
       const t = row.timings;
-      log(`${psd.name}: whole import ${wallMs} ms = ${row.vsImageMagick?.toFixed(2) ?? 'n/a'}x ImageMagick, ${row.vsFloor.toFixed(2)}x floor`);
+      if (!workerInProcess && psd === psds[0]) log('with the worker in a process of its own (the job downloads the stored file):');
+      log(`${workerInProcess ? '' : '  '}${psd.name}: whole import ${wallMs} ms = ${row.vsImageMagick?.toFixed(2) ?? 'n/a'}x ImageMagick, ${row.vsFloor.toFixed(2)}x floor`);
       const ms = (v: number) => `${Math.round(v)} ms`;
-      log(`  phases: upload to storage ${ms(row.uploadMs)}, claim ${ms(t.claimMs)}, download ${ms(t.downloadMs)}, unpack ${ms(t.unpackMs)} (parse ${ms(t.unpack?.parseMs ?? 0)}, cut ${ms(t.unpack?.cutMs ?? 0)}, encode ${ms(t.unpack?.encodeMs ?? 0)}),`
+      log(`  phases: upload to storage ${ms(row.uploadMs)}${t.unpackedEarly ? ' (unpacking meanwhile)' : ''}, claim ${ms(t.claimMs)}, download ${ms(t.downloadMs)}, unpack ${t.unpackedEarly ? 'after the claim ' : ''}${ms(t.unpackMs)} (parse ${ms(t.unpack?.parseMs ?? 0)}, cut ${ms(t.unpack?.cutMs ?? 0)}, encode ${ms(t.unpack?.encodeMs ?? 0)}),`
         + ` storage after the unpack ${ms(t.storageMs)} (${t.storedDuringUnpack} of ${t.stored} motifs stored during the unpack), db ${ms(t.dbMs)}`);
       log(`  peak memory: unpack child ${Math.round((t.childPeakRssBytes ?? 0) / 1048576)} MB, worker process ${row.parentPeakRssMb} MB`);
     }
   } finally {
+    await earlyUnpacks.close();
     prewarmUnpackWorker(false);
     await runtime.close();
   }

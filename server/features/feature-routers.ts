@@ -9,6 +9,7 @@ import { createLibraryCache } from './motifs/library-cache';
 import { createMotifsRepository } from './motifs/motifs.repository';
 import { motifsRouter } from './motifs/motifs.router';
 import { createMotifsService } from './motifs/motifs.service';
+import type { EarlyUnpacks } from './originals/early-unpacks';
 import { createOriginalsCleanup } from './originals/originals-cleanup';
 import { createOriginalsRepository } from './originals/originals.repository';
 import { originalsRouter } from './originals/originals.router';
@@ -21,14 +22,20 @@ import { studioDataRouters } from './studio-data/studio-data-routers';
 import { createTagsRepository } from './tags/tags.repository';
 import { tagsRouter } from './tags/tags.router';
 
-// Feature routers that need the queue or storage beyond the foundation's.
-export function featureRouters(runtime: Pick<Runtime, 'config' | 'db' | 'storage' | 'queue' | 'mailer'>, _shared: SharedServices): Router[] {
+// Feature routers that need the queue or storage beyond the foundation's. `earlyUnpacks` only
+// when this process also runs the import worker (shared with it).
+export function featureRouters(
+  runtime: Pick<Runtime, 'config' | 'db' | 'storage' | 'queue' | 'mailer'>,
+  _shared: SharedServices,
+  options: { earlyUnpacks?: EarlyUnpacks } = {},
+): Router[] {
   const { db, storage, queue, config } = runtime;
   const originals = createOriginalsService({
     repo: createOriginalsRepository(db.db),
     storage,
     queue,
     cleanup: createOriginalsCleanup(db.db, storage),
+    earlyUnpacks: options.earlyUnpacks,
   });
   // One library cache per process: each keeps itself fresh against Postgres (library-changes.ts).
   const libraryCache = createLibraryCache(db.db);

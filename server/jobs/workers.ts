@@ -1,4 +1,5 @@
 import type PgBoss from 'pg-boss';
+import type { EarlyUnpacks } from '../features/originals/early-unpacks';
 import { createOriginalImporter } from '../features/originals/import-original';
 import { createOriginalsRepository } from '../features/originals/originals.repository';
 import { prewarmUnpackWorker, runUnpack } from '../features/originals/unpack/run-unpack';
@@ -7,11 +8,12 @@ import { startExportWorkers } from './export-workers';
 import { queueNames, type ImportJobData } from './queue';
 
 // Runs import jobs (and, through startExportWorkers, export jobs): in the web process in
-// development, in `npm run worker` processes in production.
-export async function startImportWorkers(runtime: Runtime): Promise<() => Promise<void>> {
+// development, in `npm run worker` processes in production. In the web process, `earlyUnpacks`
+// (shared with the originals service) hands the jobs the uploads this process already unpacks.
+export async function startImportWorkers(runtime: Runtime, options: { earlyUnpacks?: EarlyUnpacks } = {}): Promise<() => Promise<void>> {
   const stopExports = await startExportWorkers(runtime);
   const repo = createOriginalsRepository(runtime.db.db);
-  const importOriginal = createOriginalImporter({ db: runtime.db.db, repo, storage: runtime.storage, runUnpack });
+  const importOriginal = createOriginalImporter({ db: runtime.db.db, repo, storage: runtime.storage, runUnpack, earlyUnpacks: options.earlyUnpacks });
   // A loaded spare child saves about a second per import; tests start cold to spare the CPU.
   if (runtime.config.NODE_ENV !== 'test') void prewarmUnpackWorker(true);
   const ids: string[] = [];

@@ -10,9 +10,17 @@ import { toMotifSummary } from './motif-dto';
 import { originalFileKey } from './motif-keys';
 import type { OriginalRow, OriginalsRepository } from './originals.repository';
 import { SNIFF_BYTES, sniffFileType } from './unpack/sniff-file-type';
+import type { EarlyUnpack, EarlyUnpacks } from './early-unpacks';
 import type { OriginalsCleanup } from './originals-cleanup';
 
-type Deps = { repo: OriginalsRepository; storage: ObjectStorage; queue: Pick<JobQueue, 'enqueueImport'>; cleanup: OriginalsCleanup };
+type Deps = {
+  repo: OriginalsRepository;
+  storage: ObjectStorage;
+  queue: Pick<JobQueue, 'enqueueImport'>;
+  cleanup: OriginalsCleanup;
+  // set when this process also runs the import worker: uploads start unpacking while they are stored
+  earlyUnpacks?: Pick<EarlyUnpacks, 'begin'>;
+};
 
 const acceptedKinds = new Set(['psd', 'psb', 'png', 'jpeg', 'webp'] as const);
 
@@ -59,7 +67,7 @@ export function toOriginalSummary(row: OriginalRow, motifCount: number, uploaded
   };
 }
 
-export function createOriginalsService({ repo, storage, queue, cleanup }: Deps) {
+export function createOriginalsService({ repo, storage, queue, cleanup, earlyUnpacks }: Deps) {
   async function detail(studioId: string, id: string): Promise<OriginalDetail> {
     const row = await repo.find(studioId, id);
     if (!row) throw notFound('That original');
@@ -80,8 +88,11 @@ export function createOriginalsService({ repo, storage, queue, cleanup }: Deps) 
       return rows.map((r) => toOriginalSummary(r.original, r.motifCount));
     },
 
-    // The upload is already on local disk (multer); it goes to storage unchanged before any parsing.
+    // The upload is already on local disk (multer); it goes to storage unchanged before its row
+    // is written and queued. An early unpack may read the local file meanwhile; nothing of it
+    // is stored or shown until the job claims it (early-unpacks.ts).
     async upload(input: { studioId: string; userId: string; filePath: string; fileName: string; byteSize: number; cut: 'groups' | 'layers'; previousOriginalId?: string }) {
+      let early: EarlyUnpack | null = null;
       try {
         const sniffed = sniffFileType(await readHead(input.filePath));
         if (sniffed.kind === 'svg') {
@@ -98,6 +109,7 @@ export function createOriginalsService({ repo, storage, queue, cleanup }: Deps) 
         }
         const id = randomUUID();
         const key = originalFileKey(input.studioId, id);
+        early = (await earlyUnpacks?.begin({ originalId: id, studioId: input.studioId, filePath: input.filePath, cut: input.cut, originalName: cleanFileName(input.fileName) })) ?? null;
         const hash = createHash('sha256');
         // Hashed as the bytes go up; a transform only passes data on as the upload reads it, so
         // no chunk flows past before the request is ready for it.
@@ -112,13 +124,15 @@ export function createOriginalsService({ repo, storage, queue, cleanup }: Deps) 
         );
         source.on('error', (err) => body.destroy(err));
         await storage.put(key, body, 'application/octet-stream', { contentLength: input.byteSize });
+        const fileSha256 = hash.digest('hex');
+        early?.stored(fileSha256, input.byteSize);
         const row = await repo.insert({
           id,
           studioId: input.studioId,
           name: cleanFileName(input.fileName),
           fileKind: sniffed.kind === 'psb' ? 'psd' : (sniffed.kind as 'psd' | 'png' | 'jpeg' | 'webp'),
           byteSize: input.byteSize,
-          fileSha256: hash.digest('hex'),
+          fileSha256,
           storageKey: key,
           cut: input.cut,
           previousOriginalId: input.previousOriginalId ?? null,
@@ -127,8 +141,12 @@ export function createOriginalsService({ repo, storage, queue, cleanup }: Deps) 
         });
         await queue.enqueueImport(row.id);
         return { id: row.id, status: row.status };
+      } catch (err) {
+        await early?.cancel();
+        throw err;
       } finally {
-        await rm(input.filePath, { force: true });
+        // a file an early unpack reads is removed by it, once it and the upload are done with it
+        if (!early) await rm(input.filePath, { force: true });
       }
     },
 

@@ -19,10 +19,12 @@ export async function createTestApp(overrides: Record<string, string> = {}, opti
     ...overrides,
   });
   const runtime = await openRuntime(config);
-  const app = createApp({ ...runtime, extraRouters: (shared) => featureRouters(runtime, shared) });
-  // Loaded only when asked for, so tests without imports do not start the unpacker.
+  // Loaded only when asked for, so tests without imports do not start the unpacker. With the
+  // worker in process, uploads start unpacking while they are stored, as in `npm start`.
+  const earlyUnpacks = options.workers ? await createEarlyUnpacksFor(config) : undefined;
+  const app = createApp({ ...runtime, extraRouters: (shared) => featureRouters(runtime, shared, { earlyUnpacks }) });
   const stopWorkers = options.workers
-    ? await (await import('../../../server/jobs/workers')).startImportWorkers(runtime)
+    ? await (await import('../../../server/jobs/workers')).startImportWorkers(runtime, { earlyUnpacks })
     : async () => {};
   return {
     app,
@@ -30,9 +32,18 @@ export async function createTestApp(overrides: Record<string, string> = {}, opti
     config,
     async close() {
       await stopWorkers();
+      await earlyUnpacks?.close();
       await runtime.close();
     },
   };
+}
+
+async function createEarlyUnpacksFor(config: AppConfig) {
+  const [{ createEarlyUnpacks }, { runUnpack }] = await Promise.all([
+    import('../../../server/features/originals/early-unpacks'),
+    import('../../../server/features/originals/unpack/run-unpack'),
+  ]);
+  return createEarlyUnpacks({ runUnpack, maxRunning: config.IMPORT_CONCURRENCY });
 }
 
 let counter = 0;

@@ -20,22 +20,28 @@ const CHILD_ENV_KEYS = ['PATH', 'NODE_ENV', 'TMPDIR', 'LANG', 'TZ', 'UV_THREADPO
 // Unpacks an uploaded original in a child process (tsx loader, capped V8 heap, resident
 // memory watched, wall-clock limit), so a hostile file can never take the calling process down.
 // Rejects with an UnpackError naming the problem. `onMotif` hears of each motif whose files are
-// written, before the result (which lists every motif again).
+// written, before the result (which lists every motif again). Aborting `signal` stops the child
+// at once and rejects with an AbortError: not an UnpackError, as the file may well be fine.
 export function runUnpack(
   input: UnpackInput,
   onProgress?: (progress: UnpackProgress) => void,
   onMotif?: (motif: UnpackedMotif) => void,
+  signal?: AbortSignal,
 ): Promise<UnpackResult> {
+  if (signal?.aborted) return Promise.reject(cancelled());
   const limits = resolveUnpackLimits(input.limits);
   const started = performance.now();
   const child = takeChild(Math.round(limits.maxHeapMb));
   return new Promise<UnpackResult>((resolve, reject) => {
     let settled = false;
+    const onAbort = () => finish(cancelled());
+    signal?.addEventListener('abort', onAbort, { once: true });
     let stderr = '';
     let peakRss = 0;
-    const finish = (error: UnpackError | null, result?: UnpackResult) => {
+    const finish = (error: Error | null, result?: UnpackResult) => {
       if (settled) return;
       settled = true;
+      signal?.removeEventListener('abort', onAbort);
       clearTimeout(timer);
       clearInterval(watch);
       if (child.exitCode === null && child.signalCode === null) child.kill('SIGKILL');
@@ -96,6 +102,10 @@ export function runUnpack(
       finish(new UnpackError('unpack.crashed', 'The unpack worker could not be reached'));
     }
   });
+}
+
+function cancelled(): Error {
+  return new DOMException('The unpack was stopped before it finished', 'AbortError');
 }
 
 // Starting a child (tsx, sharp, ag-psd) takes most of a second. A long-running worker can keep
