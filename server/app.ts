@@ -1,5 +1,7 @@
+import compression from 'compression';
 import connectPgSimple from 'connect-pg-simple';
 import express, { type Express, type Router } from 'express';
+import expressStaticGzip from 'express-static-gzip';
 import session from 'express-session';
 import helmet from 'helmet';
 import { existsSync } from 'node:fs';
@@ -17,6 +19,8 @@ import { createStudioRepository } from './features/studio/studio.repository';
 import { STUDIO_DATA_IMPORT_PATH, studioDataBodyParser } from './features/studio-data/studio-data-body';
 import { studioRouter } from './features/studio/studio.router';
 import { createStudioService } from './features/studio/studio.service';
+import { createClientShell } from './lib/client-shell';
+import { compressible } from './lib/compressible';
 import type { Mailer } from './lib/mail';
 import type { ObjectStorage } from './lib/storage';
 import { loadAuth } from './middleware/auth';
@@ -65,6 +69,8 @@ export function createApp(deps: AppDeps): Express {
     }),
   );
 
+  app.use(compression({ filter: compressible }));
+
   // The studio data import takes a larger body than any other route.
   app.use(STUDIO_DATA_IMPORT_PATH, studioDataBodyParser);
   app.use('/api', express.json({ limit: config.JSON_LIMIT_BYTES }));
@@ -107,9 +113,25 @@ export function createApp(deps: AppDeps): Express {
 
   const clientDir = deps.clientDir ?? path.resolve('dist/client');
   if (existsSync(path.join(clientDir, 'index.html'))) {
-    app.use(express.static(clientDir, { index: false, maxAge: '1h' }));
+    const assetsDir = path.join(clientDir, 'assets') + path.sep;
+    app.use(
+      // The build writes brotli and gzip copies beside scripts and styles (vite.config.ts): sent
+      // as they are, so no request pays for compressing them.
+      expressStaticGzip(clientDir, {
+        index: false,
+        enableBrotli: true,
+        orderPreference: ['br', 'gz'],
+        serveStatic: {
+          maxAge: '1h',
+          // Vite names every file under assets/ by its content's hash: a new build is a new name.
+          setHeaders: (res, file) => {
+            if (file.startsWith(assetsDir)) res.setHeader('Cache-Control', 'public, max-age=31536000, immutable');
+          },
+        },
+      }),
+    );
     // Client-side routes all answer with the app shell.
-    app.get(/^(?!\/api\/).*/, (_req, res) => res.sendFile(path.join(clientDir, 'index.html')));
+    app.get(/^(?!\/api\/).*/, createClientShell(clientDir));
   }
   app.use(errorHandler);
   return app;

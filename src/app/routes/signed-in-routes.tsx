@@ -1,17 +1,12 @@
 import type { QueryClient } from '@tanstack/react-query';
 import type { RouteObject } from 'react-router-dom';
-import { activityLoader } from '../../features/activity/routes/loaders';
-import { libraryLoader, libraryShouldRevalidate } from '../../features/library/routes/loaders';
-import { motifLoader } from '../../features/motifs/routes/loaders';
-import { originalLoader, originalsLoader } from '../../features/originals/routes/loaders';
-import { productLoader, productsLoader } from '../../features/products/routes/loaders';
-import { membersLoader, settingsLoader } from '../../features/studio/routes/loaders';
-import { calendarLoader } from '../../features/calendar/routes/loaders';
-import { salesLoader } from '../../features/sales/routes/loaders';
+import { libraryShouldRevalidate } from '../../features/library/routes/library-revalidation';
 
 // Pages inside the studio (top bar, signed-in guard). To add a feature's page: add an entry
-// here with `lazy: { Component }` pointing at features/<noun>/routes/<page>.tsx, and a loader
-// from features/<noun>/routes/loaders.ts that prefetches the page's queryOptions.
+// here with `lazy: { loader, Component }`: the page from features/<noun>/routes/<page>.tsx and a
+// loader from features/<noun>/routes/loaders.ts that prefetches the page's queryOptions. Both are
+// imported lazily, so the main chunk carries no page's code, API schemas or fetchers; the two
+// load side by side when the page is first opened.
 export const signedInRoutes = (queryClient: QueryClient): RouteObject[] => [
   {
     index: true,
@@ -19,40 +14,44 @@ export const signedInRoutes = (queryClient: QueryClient): RouteObject[] => [
   },
   {
     path: 'library',
-    loader: libraryLoader(queryClient),
     shouldRevalidate: libraryShouldRevalidate,
-    lazy: { Component: () => import('../../features/library/routes/library-page').then((m) => m.LibraryPage) },
+    lazy: {
+      loader: async () => (await import('../../features/library/routes/loaders')).libraryLoader(queryClient),
+      Component: () => import('../../features/library/routes/library-page').then((m) => m.LibraryPage),
+    },
   },
   {
     path: 'library/:motifId',
-    loader: motifLoader(queryClient),
-    lazy: { Component: () => import('../../features/motifs/routes/motif-page').then((m) => m.MotifPage) },
+    lazy: {
+      loader: async () => (await import('../../features/motifs/routes/loaders')).motifLoader(queryClient),
+      Component: () => import('../../features/motifs/routes/motif-page').then((m) => m.MotifPage),
+    },
   },
   {
     path: 'originals',
-    loader: originalsLoader(queryClient),
     lazy: {
+      loader: async () => (await import('../../features/originals/routes/loaders')).originalsLoader(queryClient),
       Component: () => import('../../features/originals/routes/originals-page').then((m) => m.OriginalsPage),
     },
   },
   {
     path: 'originals/:originalId',
-    loader: originalLoader(queryClient),
     lazy: {
+      loader: async () => (await import('../../features/originals/routes/loaders')).originalLoader(queryClient),
       Component: () => import('../../features/originals/routes/original-page').then((m) => m.OriginalPage),
     },
   },
   {
     path: 'products',
-    loader: productsLoader(queryClient),
     lazy: {
+      loader: async () => (await import('../../features/products/routes/loaders')).productsLoader(queryClient),
       Component: () => import('../../features/products/routes/products-page').then((m) => m.ProductsPage),
     },
   },
   {
     path: 'products/:productId',
-    loader: productLoader(queryClient),
     lazy: {
+      loader: async () => (await import('../../features/products/routes/loaders')).productLoader(queryClient),
       Component: () => import('../../features/products/routes/product-page').then((m) => m.ProductPage),
     },
   },
@@ -76,27 +75,37 @@ export const signedInRoutes = (queryClient: QueryClient): RouteObject[] => [
   },
   {
     path: 'activity',
-    loader: activityLoader(queryClient),
-    lazy: { Component: () => import('../../features/activity/routes/activity-page').then((m) => m.ActivityPage) },
+    lazy: {
+      loader: async () => (await import('../../features/activity/routes/loaders')).activityLoader(queryClient),
+      Component: () => import('../../features/activity/routes/activity-page').then((m) => m.ActivityPage),
+    },
   },
   {
     path: 'calendar',
-    loader: calendarLoader(queryClient),
-    lazy: { Component: () => import('../../features/calendar/routes/calendar-page').then((m) => m.CalendarPage) },
+    lazy: {
+      loader: async () => (await import('../../features/calendar/routes/loaders')).calendarLoader(queryClient),
+      Component: () => import('../../features/calendar/routes/calendar-page').then((m) => m.CalendarPage),
+    },
   },
   {
     path: 'sales',
-    loader: salesLoader(queryClient),
-    lazy: { Component: () => import('../../features/sales/routes/sales-page').then((m) => m.SalesPage) },
+    lazy: {
+      loader: async () => (await import('../../features/sales/routes/loaders')).salesLoader(queryClient),
+      Component: () => import('../../features/sales/routes/sales-page').then((m) => m.SalesPage),
+    },
   },
   {
     path: 'members',
-    loader: membersLoader(queryClient),
-    lazy: { Component: () => import('../../features/studio/routes/members-page').then((m) => m.MembersPage) },
+    lazy: {
+      loader: async () => (await import('../../features/studio/routes/loaders')).membersLoader(queryClient),
+      Component: () => import('../../features/studio/routes/members-page').then((m) => m.MembersPage),
+    },
   },
   {
     path: 'settings',
-    loader: settingsLoader(queryClient),
-    lazy: { Component: () => import('../../features/studio/routes/settings-page').then((m) => m.SettingsPage) },
+    lazy: {
+      loader: async () => (await import('../../features/studio/routes/loaders')).settingsLoader(queryClient),
+      Component: () => import('../../features/studio/routes/settings-page').then((m) => m.SettingsPage),
+    },
   },
 ];

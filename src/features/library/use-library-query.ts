@@ -1,6 +1,6 @@
 import { useCallback, useMemo } from 'react';
 import { useSearchParams } from 'react-router-dom';
-import { readLibraryQuery, writeLibraryQuery, type LibraryQuery } from './library-query';
+import { readLibraryQuery, writeLibraryQuery, type LibraryQuery } from '@shared/library/library-address';
 
 // The library's query lives in the address, so a search can be bookmarked, shared and found
 // again with Back. Changes replace the entry (typing a word is not a page of history).

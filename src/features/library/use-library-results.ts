@@ -1,9 +1,9 @@
 import { useQueries, useQueryClient } from '@tanstack/react-query';
 import { useCallback, useMemo } from 'react';
 import type { LibraryMotif, MotifListResponse } from '@shared/contracts/motifs';
-import { MOTIF_PAGE_SIZE, motifPageQueryOptions } from './api/get-motif-page';
+import { motifPageQueryOptions } from './api/get-motif-page';
 import { motifKeys } from '../motifs/api/motif-keys';
-import type { LibraryQuery } from './library-query';
+import { MOTIF_PAGE_SIZE, type LibraryQuery } from '@shared/library/library-address';
 
 export type VisibleRange = { first: number; last: number };
 

@@ -4,7 +4,7 @@ import { Button } from '../../../components/ui/button';
 import { StatusMessage } from '../../../components/ui/status-message';
 import { errorMessageOf } from '../../../lib/use-form-errors';
 import { useBulkEditMotifs } from '../api/bulk-edit-motifs';
-import { toMotifFilter, type LibraryQuery } from '../library-query';
+import { toMotifFilter, type LibraryQuery } from '@shared/library/library-address';
 import { selectedCount, type Selection } from '../selection';
 import { BulkCollectionDialog, BulkRightsDialog, BulkTagsDialog } from './bulk-dialogs';
 

@@ -7,7 +7,7 @@ import { SelectField } from '../../../components/ui/select-field';
 import { useCollections } from '../../collections/api/get-collections';
 import { useOriginals } from '../../originals/api/get-originals';
 import { useTags } from '../api/get-tags';
-import { emptyLibraryQuery, type LibraryQuery } from '../library-query';
+import { emptyLibraryQuery, type LibraryQuery } from '@shared/library/library-address';
 import { rightsWords } from '../rights-words';
 import { ColourFilter } from './colour-filter';
 import { TagInput } from './tag-input';

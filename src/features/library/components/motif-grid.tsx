@@ -37,7 +37,7 @@ const moves: Record<string, (index: number, columns: number) => number> = {
 export function MotifGrid(props: MotifGridProps) {
   const { total, motifAt, onVisibleRange, selectable, selection, selecting, onSelect, dimmed, label } = props;
   const gridRef = useRef<HTMLDivElement>(null);
-  const { width, top } = useGridBox(gridRef);
+  const { width, top, measured } = useGridBox(gridRef);
   const { columns, rowHeight } = tileGeometry(width);
   const rowCount = Math.ceil(total / columns);
 
@@ -50,7 +50,10 @@ export function MotifGrid(props: MotifGridProps) {
     scrollPaddingEnd: 120,
   });
   useEffect(() => virtualizer.measure(), [virtualizer, rowHeight]);
-  const rows = virtualizer.getVirtualItems();
+  const rows = measured ? virtualizer.getVirtualItems() : [];
+  // Rows on the screen now load their pictures first; the overscan rows below wait their turn.
+  const viewTop = virtualizer.scrollOffset ?? 0;
+  const viewBottom = viewTop + (virtualizer.scrollRect?.height ?? window.innerHeight);
 
   const first = rows.length ? rows[0].index * columns : 0;
   const last = rows.length ? Math.min(total, (rows[rows.length - 1].index + 1) * columns) - 1 : -1;
@@ -113,6 +116,7 @@ export function MotifGrid(props: MotifGridProps) {
       {rows.map((row) => {
         const start = row.index * columns;
         const count = Math.min(columns, total - start);
+        const onScreen = row.end > viewTop && row.start < viewBottom;
         return (
           <div
             key={row.key}
@@ -137,6 +141,7 @@ export function MotifGrid(props: MotifGridProps) {
                   selectable={selectable}
                   selected={isSelected(selection, motif.id)}
                   selecting={selecting}
+                  onScreen={onScreen}
                   onSelect={onSelect}
                   onPickColour={props.onPickColour}
                 />

@@ -13,6 +13,8 @@ type MotifTileProps = {
   selected: boolean;
   /** While something is selected, a plain click adds to the selection instead of opening. */
   selecting: boolean;
+  /** On the screen as the page opens: its picture is fetched at once, ahead of the rows below. */
+  onScreen: boolean;
   onSelect: (id: string, kind: ClickKind) => void;
   onPickColour: (hex: string) => void;
 };
@@ -23,7 +25,7 @@ const kindFromEvent = (event: MouseEvent, selecting: boolean): ClickKind | null 
   return selecting ? 'toggle' : null;
 };
 
-export const MotifTile = memo(function MotifTile({ motif, index, total, selectable, selected, selecting, onSelect, onPickColour }: MotifTileProps) {
+export const MotifTile = memo(function MotifTile({ motif, index, total, selectable, selected, selecting, onScreen, onSelect, onPickColour }: MotifTileProps) {
   const onLinkClick = (event: MouseEvent<HTMLAnchorElement>) => {
     if (!selectable || event.button !== 0) return;
     const kind = kindFromEvent(event, selecting);
@@ -53,7 +55,7 @@ export const MotifTile = memo(function MotifTile({ motif, index, total, selectab
         onClick={onLinkClick}
         className="flex min-w-0 scroll-mt-20 scroll-mb-32 flex-col gap-1.5 rounded-md"
       >
-        <MotifThumbnail src={motif.thumbUrl} />
+        <MotifThumbnail src={motif.thumbUrl} priority={onScreen ? 'high' : 'low'} />
         <span className="truncate px-1 font-semibold text-ink group-hover:text-tide-deep" title={motif.name}>
           {motif.name}
           {selected && <span className="sr-only">, selected</span>}

@@ -1,6 +1,6 @@
 import type { ReactNode } from 'react';
 import type { MotifFacets } from '@shared/contracts/motifs';
-import type { LibraryQuery } from '../library-query';
+import type { LibraryQuery } from '@shared/library/library-address';
 import { rightsWords } from '../rights-words';
 
 type ResultSummaryProps = {

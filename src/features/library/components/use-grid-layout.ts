@@ -15,9 +15,12 @@ export function tileGeometry(width: number): TileGeometry {
 }
 
 // The grid's width, and its top in page coordinates (the window virtualiser's scroll margin).
+// `measured` stays false until the first measurement: rows drawn before it would be laid out
+// for a guessed width, then thrown away.
 export function useGridBox(ref: RefObject<HTMLElement | null>) {
   const [width, setWidth] = useState(0);
   const [top, setTop] = useState(0);
+  const [measured, setMeasured] = useState(false);
   useLayoutEffect(() => {
     const element = ref.current;
     if (!element) return;
@@ -25,6 +28,7 @@ export function useGridBox(ref: RefObject<HTMLElement | null>) {
       const box = element.getBoundingClientRect();
       setWidth(box.width);
       setTop(box.top + window.scrollY);
+      setMeasured(true);
     };
     measure();
     const observer = new ResizeObserver(measure);
@@ -33,5 +37,5 @@ export function useGridBox(ref: RefObject<HTMLElement | null>) {
     observer.observe(document.body);
     return () => observer.disconnect();
   }, [ref]);
-  return { width, top };
+  return { width, top, measured };
 }

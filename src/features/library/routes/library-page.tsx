@@ -13,7 +13,7 @@ import { LibraryFilters } from '../components/library-filters';
 import { MotifGrid } from '../components/motif-grid';
 import { ResultSummary } from '../components/result-summary';
 import { SearchBox } from '../components/search-box';
-import { emptyLibraryQuery, isFiltered, writeLibraryQuery } from '../library-query';
+import { emptyLibraryQuery, isFiltered, writeLibraryQuery } from '@shared/library/library-address';
 import { applyClick, emptySelection, hasSelection, lassoSelect, selectAllOfFilter, type ClickKind, type Selection } from '../selection';
 import { useLibraryQuery } from '../use-library-query';
 import { useLibraryResults, type VisibleRange } from '../use-library-results';

@@ -1,7 +1,7 @@
 import type { QueryClient } from '@tanstack/react-query';
-import type { LoaderFunctionArgs, ShouldRevalidateFunctionArgs } from 'react-router-dom';
+import type { LoaderFunctionArgs } from 'react-router-dom';
 import { motifPageQueryOptions } from '../api/get-motif-page';
-import { readLibraryQuery } from '../library-query';
+import { readLibraryQuery } from '@shared/library/library-address';
 
 // The first page of results for the address's query, fetched alongside the page's code.
 export const libraryLoader =
@@ -11,8 +11,3 @@ export const libraryLoader =
     await queryClient.prefetchQuery(motifPageQueryOptions(query, 0));
     return null;
   };
-
-// Typing a search or ticking a filter changes only the address's query; the page fetches
-// those results itself (keeping the previous ones on screen), so the loader need not run.
-export const libraryShouldRevalidate = ({ currentUrl, nextUrl, defaultShouldRevalidate }: ShouldRevalidateFunctionArgs) =>
-  currentUrl.pathname === nextUrl.pathname ? false : defaultShouldRevalidate;

@@ -1,4 +1,4 @@
-import type { LibraryQuery } from '../../library/library-query';
+import type { LibraryQuery } from '@shared/library/library-address';
 
 // Everything under 'motifs' belongs to the current studio. Library pages sit under the list of
 // their query, so changing one motif can refresh every grid with one invalidation of `lists()`.

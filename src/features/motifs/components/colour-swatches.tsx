@@ -1,6 +1,6 @@
 import { Link } from 'react-router-dom';
 import type { MotifSummary } from '@shared/contracts/originals';
-import { writeLibraryQuery, emptyLibraryQuery } from '../../library/library-query';
+import { writeLibraryQuery, emptyLibraryQuery } from '@shared/library/library-address';
 
 // Each main colour with its share of the motif's pixels; choosing one searches the library by it.
 export function ColourSwatches({ colours }: { colours: MotifSummary['colours'] }) {

@@ -7,7 +7,7 @@ import { StatusMessage } from '../../../components/ui/status-message';
 import { errorMessageOf } from '../../../lib/use-form-errors';
 import { useCollections } from '../../collections/api/get-collections';
 import { useUpdateCollectionMotifs } from '../../collections/api/update-collection-motifs';
-import { emptyLibraryQuery, writeLibraryQuery } from '../../library/library-query';
+import { emptyLibraryQuery, writeLibraryQuery } from '@shared/library/library-address';
 
 export function MotifCollections({ motif, canEdit }: { motif: MotifDetail; canEdit: boolean }) {
   const collections = useCollections();

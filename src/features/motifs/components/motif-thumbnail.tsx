@@ -8,11 +8,13 @@ type MotifThumbnailProps = {
   alt?: string;
   className?: string;
   cell?: number;
+  /** `high`: on the screen now, fetched at once and first; `low` (the default): fetched as it nears the screen. */
+  priority?: 'high' | 'low';
 };
 
 // A square box of fixed size, so the grid never jumps while thumbnails arrive; the picture
-// loads only when it nears the screen.
-export function MotifThumbnail({ src, alt = '', className, cell = 8 }: MotifThumbnailProps) {
+// loads only when it nears the screen, unless the caller knows it is on the screen already.
+export function MotifThumbnail({ src, alt = '', className, cell = 8, priority = 'low' }: MotifThumbnailProps) {
   const [state, setState] = useState<'loading' | 'shown' | 'broken'>('loading');
   return (
     <div className={classNames('relative aspect-square overflow-hidden rounded-md', className)} style={checkerboardStyle(cell)}>
@@ -20,7 +22,8 @@ export function MotifThumbnail({ src, alt = '', className, cell = 8 }: MotifThum
         <img
           src={src}
           alt={alt}
-          loading="lazy"
+          loading={priority === 'high' ? 'eager' : 'lazy'}
+          fetchPriority={priority === 'high' ? 'high' : 'auto'}
           decoding="async"
           draggable={false}
           onLoad={() => setState('shown')}

@@ -5,7 +5,7 @@ import {
   type MotifFilter,
   type MotifSort,
   type RightsStatusDto,
-} from '@shared/contracts/motifs';
+} from '../contracts/motifs';
 
 // What the library page shows, as it lives in the address bar: only what differs from the
 // defaults is written, so a plain /library is the whole library, newest first.
@@ -93,6 +93,16 @@ export function toMotifFilter(query: LibraryQuery): MotifFilter {
     usage: query.usage,
     archived: query.archived,
   };
+}
+
+// A page of the library grid. The grid asks for the pages its visible rows need, so scrolling
+// (or dragging the scrollbar) to the middle of 10,000 motifs fetches that page alone.
+export const MOTIF_PAGE_SIZE = 120;
+
+// The query string of GET /api/motifs for one page of the grid. The client's fetch and the
+// server's preload of the first screen both use it: a preload only helps for the very same URL.
+export function motifPageSearch(query: LibraryQuery, pageIndex: number): string {
+  return motifListSearch(query, pageIndex * MOTIF_PAGE_SIZE, MOTIF_PAGE_SIZE);
 }
 
 // The query string of GET /api/motifs for one page of results.

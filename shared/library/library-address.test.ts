@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { motifListQuerySchema } from '@shared/contracts/motifs';
-import { emptyLibraryQuery, motifListSearch, readLibraryQuery, toMotifFilter, writeLibraryQuery } from './library-query';
+import { motifListQuerySchema } from '../contracts/motifs';
+import { emptyLibraryQuery, motifListSearch, readLibraryQuery, toMotifFilter, writeLibraryQuery } from './library-address';
 
 const collectionId = '1c1b6c0e-7a2b-4d4f-9a57-2b1d0c9a7f10';
 
