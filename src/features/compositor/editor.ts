@@ -71,6 +71,8 @@ export class ProductEditor {
   get selection(): readonly string[] { return this.state.selection; }
   get viewport(): Viewport { return this.state.viewport; }
   get inGesture(): boolean { return this.gestureStart !== null; }
+  /** The layout at the start of the gesture in progress; null between gestures. */
+  get gestureSnapshot(): Layout | null { return this.gestureStart?.layout ?? null; }
 
   private set(patch: Partial<EditorState>): void {
     this.state = { ...this.state, ...patch, canUndo: this.history.canUndo, canRedo: this.history.canRedo };
