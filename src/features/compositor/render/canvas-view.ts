@@ -25,7 +25,7 @@ export class CanvasView {
 
   constructor(private readonly canvas: HTMLCanvasElement, private readonly editor: ProductEditor, loadThumb?: LoadThumb) {
     this.images = new MotifImageCache(loadThumb, () => this.request());
-    const offEditor = editor.subscribe(() => this.request());
+    const offEditor = editor.subscribeFrames(() => this.request());
     const offFonts = fontCache.subscribe(() => this.request());
     this.unsubscribe = () => {
       offEditor();
