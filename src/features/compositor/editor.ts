@@ -34,11 +34,19 @@ type Listener = () => void;
 
 // 200 steps: the issue asks for at least 100; snapshots share unchanged placements, so this is cheap.
 const HISTORY_LIMIT = 200;
+// The panels' pace during a pointer gesture: ten updates a second read as live, and a re-render of
+// React's panels each pointer move costs the frame its budget (style, layout, paint, a wider repaint).
+export const PANEL_CATCH_UP_MS = 100;
+
+/** `pointer`: a drag on the canvas, whose panels catch up every PANEL_CATCH_UP_MS; `field`: an input driving its own preview, told at once. */
+export type GestureSource = 'pointer' | 'field';
 
 /**
  * The product editor's document and view state, outside React. Every change goes through
  * `change` (one history entry) or a gesture (`beginGesture` → `previewGesture`… → `commitGesture`
- * or `cancelGesture`), so undo steps match what the user did.
+ * or `cancelGesture`), so undo steps match what the user did. The canvas hears of every change
+ * (`subscribeFrames`); the panels (`subscribe`) of every change too, except during a pointer gesture,
+ * when they catch up at most every PANEL_CATCH_UP_MS and at its end.
  */
 export class ProductEditor {
   readonly template: Template;
@@ -46,7 +54,10 @@ export class ProductEditor {
   private history: History;
   private state: EditorState;
   private listeners = new Set<Listener>();
+  private frameListeners = new Set<Listener>();
   private gestureStart: Scene | null = null;
+  private gestureSource: GestureSource = 'field';
+  private panelTimer: ReturnType<typeof setTimeout> | null = null;
 
   constructor(template: Template, layout?: Layout, viewport: Viewport = { zoom: 0.1, panX: 0, panY: 0 }) {
     this.template = template;
@@ -59,9 +70,16 @@ export class ProductEditor {
     };
   }
 
+  /** The panels' subscription (React's useSyncExternalStore). */
   subscribe = (listener: Listener): (() => void) => {
     this.listeners.add(listener);
     return () => this.listeners.delete(listener);
+  };
+
+  /** Every change as it happens, for what draws each frame (the canvas). */
+  subscribeFrames = (listener: Listener): (() => void) => {
+    this.frameListeners.add(listener);
+    return () => this.frameListeners.delete(listener);
   };
 
   getState = (): EditorState => this.state;
@@ -71,11 +89,24 @@ export class ProductEditor {
   get selection(): readonly string[] { return this.state.selection; }
   get viewport(): Viewport { return this.state.viewport; }
   get inGesture(): boolean { return this.gestureStart !== null; }
+  /** The layout at the start of the gesture in progress; null between gestures. */
+  get gestureSnapshot(): Layout | null { return this.gestureStart?.layout ?? null; }
 
   private set(patch: Partial<EditorState>): void {
     this.state = { ...this.state, ...patch, canUndo: this.history.canUndo, canRedo: this.history.canRedo };
-    for (const l of this.listeners) l();
+    for (const l of this.frameListeners) l();
+    if (this.gestureStart && this.gestureSource === 'pointer') {
+      this.panelTimer ??= setTimeout(this.tellPanels, PANEL_CATCH_UP_MS);
+    } else {
+      this.tellPanels();
+    }
   }
+
+  private tellPanels = (): void => {
+    if (this.panelTimer !== null) clearTimeout(this.panelTimer);
+    this.panelTimer = null;
+    for (const l of this.listeners) l();
+  };
 
   /** One undoable change; returns false when it changed nothing. */
   change(fn: (layout: Layout) => Layout, selection?: readonly string[]): boolean {
@@ -91,8 +122,11 @@ export class ProductEditor {
   }
 
   /** Starts a gesture; previews are computed from this snapshot, never from the previous preview. */
-  beginGesture(): Layout {
-    if (!this.gestureStart) this.gestureStart = this.scene;
+  beginGesture(source: GestureSource = 'field'): Layout {
+    if (!this.gestureStart) {
+      this.gestureStart = this.scene;
+      this.gestureSource = source;
+    }
     return this.gestureStart.layout;
   }
 

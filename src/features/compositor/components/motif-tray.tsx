@@ -31,7 +31,7 @@ export function MotifTray({ onPlace, onPlaceOriginal, usualOriginalId }: MotifTr
   };
 
   return (
-    <aside aria-label="Motifs" className="flex min-h-0 flex-col gap-3 border-r border-sand bg-paper p-3">
+    <aside aria-label="Motifs" className="flex min-h-0 flex-col gap-3 rounded-bl-lg border-r border-sand bg-paper p-3">
       <label className="block text-sm font-semibold text-ink">
         Find motifs
         <input

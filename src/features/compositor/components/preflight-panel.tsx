@@ -28,7 +28,7 @@ export function PreflightPanel({ editor, productId, savedRevision }: PreflightPa
   const { problems, warnings } = live.summary;
 
   return (
-    <section aria-labelledby="preflight-heading" className="flex max-h-[50%] min-h-0 flex-col border-t border-l border-sand bg-paper text-sm" data-testid="preflight-panel">
+    <section aria-labelledby="preflight-heading" className="flex max-h-[50%] min-h-0 flex-col rounded-br-lg border-t border-l border-sand bg-paper text-sm" data-testid="preflight-panel">
       <div className="flex flex-wrap items-center gap-x-2 gap-y-1 px-3 py-2">
         <h2 id="preflight-heading" className="mr-auto text-base font-semibold whitespace-nowrap text-ink">Print check</h2>
         <div className="flex flex-wrap items-center gap-1.5">

@@ -3,6 +3,7 @@ import { drawEditorChrome } from './draw-chrome';
 import { drawScene } from './draw-scene';
 import { fontCache } from './font-cache';
 import { MotifImageCache, type LoadThumb } from './image-cache';
+import { StillLayerCache } from './still-layer-cache';
 
 type Drawn = { state: EditorState; generation: number; fonts: number; width: number; height: number; dpr: number };
 
@@ -16,6 +17,7 @@ export class CanvasView {
   private last: Drawn | null = null;
   private size = { width: 0, height: 0 };
   private unsubscribe: () => void;
+  private still = new StillLayerCache();
   /** For the bench and tests: how many frames actually drew. */
   framesDrawn = 0;
   /** For the bench: the time spent in this view's own drawing, in ms, over all frames. */
@@ -23,7 +25,7 @@ export class CanvasView {
 
   constructor(private readonly canvas: HTMLCanvasElement, private readonly editor: ProductEditor, loadThumb?: LoadThumb) {
     this.images = new MotifImageCache(loadThumb, () => this.request());
-    const offEditor = editor.subscribe(() => this.request());
+    const offEditor = editor.subscribeFrames(() => this.request());
     const offFonts = fontCache.subscribe(() => this.request());
     this.unsubscribe = () => {
       offEditor();
@@ -65,7 +67,16 @@ export class CanvasView {
     const ctx = this.canvas.getContext('2d');
     if (!ctx || width === 0 || height === 0) return;
     const began = performance.now();
-    drawScene(ctx, state.scene, this.editor.template, this.images, state.viewport, state.overlays, { dpr, geometry: this.editor.geometry, screen: this.size, printView: state.printView, guideImage: state.guideImage });
+    const { template, geometry, gestureSnapshot: snapshot } = this.editor;
+    // during a gesture the placements it leaves alone come from the still layers (see StillLayerCache)
+    if (!snapshot) this.still.forget();
+    const fromStill = snapshot !== null && this.still.draw(ctx, {
+      scene: state.scene, snapshot, template, geometry, images: this.images, fontGeneration: fontCache.generation,
+      viewport: state.viewport, overlays: state.overlays, guideImage: state.guideImage, printView: state.printView, screen: this.size, dpr,
+    });
+    if (!fromStill) {
+      drawScene(ctx, state.scene, template, this.images, state.viewport, state.overlays, { dpr, geometry, screen: this.size, printView: state.printView, guideImage: state.guideImage });
+    }
     drawEditorChrome(ctx, state, this.editor.selectionBounds(), this.editor.geometry, this.editor.template.dpi, this.size, dpr);
     this.framesDrawn += 1;
     this.drawMs += performance.now() - began;

@@ -30,6 +30,9 @@ const VEIL = 'rgba(228, 224, 216, 0.72)';
 
 const setMatrix = (ctx: Ctx2D, m: Affine) => ctx.setTransform(m[0], m[1], m[2], m[3], m[4], m[5]);
 
+/** Template px to canvas device px: the view's pan and zoom, then the screen's pixel density. */
+export const sceneScreenMatrix = (viewport: Viewport, dpr: number): Affine => compose(viewportMatrix(viewport), scale(dpr));
+
 /**
  * Draws the product as the print file would show it (the shared render plan, unclipped so
  * artwork hanging over the edge stays visible under a veil), then the template's overlays.
@@ -37,18 +40,8 @@ const setMatrix = (ctx: Ctx2D, m: Affine) => ctx.setTransform(m[0], m[1], m[2], 
 export function drawScene(ctx: Ctx2D, scene: Scene, template: Template, images: MotifImageCache, viewport: Viewport, overlays: OverlaySettings, options: DrawSceneOptions): void {
   const dpr = options.dpr ?? 1;
   const geometry = options.geometry ?? templateGeometry(template);
-  const screenM: Affine = compose(viewportMatrix(viewport), scale(dpr));
-
-  ctx.setTransform(1, 0, 0, 1, 0, 0);
-  ctx.globalAlpha = 1;
-  ctx.globalCompositeOperation = 'source-over';
-  ctx.fillStyle = PASTEBOARD;
-  ctx.fillRect(0, 0, options.screen.width * dpr, options.screen.height * dpr);
-
-  setMatrix(ctx, screenM);
-  ctx.fillStyle = blankColoursOf(template, options.variantId).body;
-  fillRect(ctx, geometry.bleedRect);
-
+  const screenM = sceneScreenMatrix(viewport, dpr);
+  drawBackdrop(ctx, template, geometry, screenM, options);
   if (options.printView) {
     const b = geometry.bleedRect;
     setMatrix(ctx, compose(scale(b.width / options.printView.width, b.height / options.printView.height), [1, 0, 0, 1, b.x, b.y], screenM));
@@ -62,15 +55,39 @@ export function drawScene(ctx: Ctx2D, scene: Scene, template: Template, images: 
     // as the print file is; with only normal ones the result is the same either way, so skip it.
     const layer = plan.ops.some((op) => op.blendMode !== 'normal') ? artworkLayer(ctx.canvas.width, ctx.canvas.height) : null;
     const target = layer ?? ctx;
-    for (const op of plan.ops) drawOp(target, op, images, screenM, geometry);
+    drawArtwork(target, plan.ops, images, screenM, geometry);
     if (layer) {
       ctx.setTransform(1, 0, 0, 1, 0, 0);
       ctx.drawImage(layer.canvas, 0, 0);
     }
   }
+  drawVeilAndOverlays(ctx, geometry, overlays, screenM, viewport.zoom * dpr, options);
+}
 
+/** The pasteboard over the whole canvas and the blank's body colour over the file. */
+export function drawBackdrop(ctx: Ctx2D, template: Template, geometry: TemplateGeometry, screenM: Affine, options: Pick<DrawSceneOptions, 'screen' | 'dpr' | 'variantId'>): void {
+  const dpr = options.dpr ?? 1;
+  ctx.setTransform(1, 0, 0, 1, 0, 0);
+  ctx.globalAlpha = 1;
+  ctx.globalCompositeOperation = 'source-over';
+  ctx.fillStyle = PASTEBOARD;
+  ctx.fillRect(0, 0, options.screen.width * dpr, options.screen.height * dpr);
+  setMatrix(ctx, screenM);
+  ctx.fillStyle = blankColoursOf(template, options.variantId).body;
+  fillRect(ctx, geometry.bleedRect);
+}
+
+/** Draw operations of the render plan, in order, straight onto `ctx`. */
+export function drawArtwork(ctx: Ctx2D, ops: readonly (MotifDrawOp | TextDrawOp)[], images: MotifImageCache, screenM: Affine, geometry: TemplateGeometry): void {
+  for (const op of ops) drawOp(ctx, op, images, screenM, geometry);
+}
+
+/** What lies over the artwork: the veil outside the print area, the printer's guide image and the template's guides. */
+export function drawVeilAndOverlays(ctx: Ctx2D, geometry: TemplateGeometry, overlays: OverlaySettings, screenM: Affine, pxPerScreen: number, options: Pick<DrawSceneOptions, 'printView' | 'guideImage'>): void {
   // Everything outside the print area will not print: veil it rather than hide it.
   setMatrix(ctx, screenM);
+  ctx.globalAlpha = 1;
+  ctx.globalCompositeOperation = 'source-over';
   ctx.fillStyle = VEIL;
   ctx.beginPath();
   const far = 1e6;
@@ -81,7 +98,7 @@ export function drawScene(ctx: Ctx2D, scene: Scene, template: Template, images: 
 
   // Not over the print simulation: that view shows only what the press would print.
   if (overlays.guideImage && options.guideImage && !options.printView) drawGuideImage(ctx, options.guideImage, geometry.bleedRect, screenM);
-  drawTemplateOverlays(ctx, geometry, overlays, screenM, viewport.zoom * dpr);
+  drawTemplateOverlays(ctx, geometry, overlays, screenM, pxPerScreen);
 }
 
 function drawOp(ctx: Ctx2D, op: MotifDrawOp | TextDrawOp, images: MotifImageCache, screenM: Affine, geometry: TemplateGeometry): void {

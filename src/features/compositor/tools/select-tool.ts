@@ -45,7 +45,7 @@ export class SelectTool {
     const bounds = host.selectionBounds();
     const handle = bounds ? handleAt(selectionHandles(bounds, host.viewport), screen) : null;
     if (bounds && handle) {
-      const snapshot = host.beginGesture();
+      const snapshot = host.beginGesture('pointer');
       const centre = { x: bounds.x + bounds.width / 2, y: bounds.y + bounds.height / 2 };
       const ids = movable(snapshot, host.selection);
       if (handle.kind === 'rotate') {
@@ -76,10 +76,10 @@ export class SelectTool {
     if (s.name === 'pointing') {
       if (Math.hypot(screen.x - s.start.x, screen.y - s.start.y) < DRAG_THRESHOLD_PX) return;
       if (s.intent === 'marquee') {
-        host.beginGesture();
+        host.beginGesture('pointer');
         this.state = { name: 'marquee', start: s.start, base: host.selection };
       } else {
-        const snapshot = host.beginGesture();
+        const snapshot = host.beginGesture('pointer');
         const ids = movable(snapshot, host.selection);
         const startBounds = host.selectionBounds();
         if (!startBounds || ids.length === 0) {
