@@ -41,6 +41,7 @@ export type AppDeps = {
 export type SharedServices = { auth: ReturnType<typeof createAuthService> };
 
 const PgStore = connectPgSimple(session);
+const SESSION_COOKIE = 'motifold.sid';
 
 export function createApp(deps: AppDeps): Express {
   const { config, db, storage, mailer } = deps;
@@ -77,7 +78,7 @@ export function createApp(deps: AppDeps): Express {
   app.use(
     '/api',
     session({
-      name: 'motifold.sid',
+      name: SESSION_COOKIE,
       store: new PgStore({ pool: db.pool, tableName: 'session', createTableIfMissing: false, pruneSessionInterval: 15 * 60 }),
       secret: config.sessionSecret,
       resave: false,
@@ -131,7 +132,7 @@ export function createApp(deps: AppDeps): Express {
       }),
     );
     // Client-side routes all answer with the app shell.
-    app.get(/^(?!\/api\/).*/, createClientShell(clientDir));
+    app.get(/^(?!\/api\/).*/, createClientShell(clientDir, { sessionCookie: SESSION_COOKIE }));
   }
   app.use(errorHandler);
   return app;

@@ -33,7 +33,8 @@ const asksForSession = (pathname: string) => !pathname.startsWith('/reset-passwo
 
 export type ClientShell = (req: Request, res: Response) => void;
 
-export function createClientShell(clientDir: string): ClientShell {
+/** `sessionCookie`: without it the page's data would only answer 401, so only the session check is named. */
+export function createClientShell(clientDir: string, { sessionCookie }: { sessionCookie: string }): ClientShell {
   const html = readFileSync(path.join(clientDir, 'index.html'), 'utf8');
   const manifest = readManifest(clientDir);
   // Data first (the server takes longest over it), then the main chunk, then the page's chunks.
@@ -43,7 +44,8 @@ export function createClientShell(clientDir: string): ClientShell {
   return (req, res) => {
     const url = new URL(req.originalUrl, 'http://shell.invalid');
     const page = pagePreloads.find((p) => p.path.test(url.pathname));
-    const data = [...(asksForSession(url.pathname) ? ['/api/auth/me'] : []), ...(page?.data(url) ?? [])];
+    const signedIn = (req.headers.cookie ?? '').split(';').some((c) => c.trim().startsWith(`${sessionCookie}=`));
+    const data = [...(asksForSession(url.pathname) ? ['/api/auth/me'] : []), ...(signedIn && page ? page.data(url) : [])];
     const seen = new Set<string>();
     const chunks = (page?.modules ?? []).flatMap((module) => chunkFiles(manifest, module, seen)).filter((file) => !html.includes(`/${file}"`));
     res.setHeader('Cache-Control', 'no-cache');

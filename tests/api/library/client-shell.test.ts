@@ -60,7 +60,7 @@ const linksIn = (html: string) => [...html.matchAll(/<link rel="(preload|modulep
 
 describe('the app shell', () => {
   it('names the library page\'s first data and chunks for the address\'s query, ahead of the app\'s code', async () => {
-    const res = await request(app).get('/library?q=puffin&tags=spring&sort=name').expect(200);
+    const res = await request(app).get('/library?q=puffin&tags=spring&sort=name').set('Cookie', 'motifold.sid=s%3Aabc').expect(200);
     expect(res.headers['content-type']).toMatch(/^text\/html/);
     expect(res.headers['cache-control']).toBe('no-cache');
     const search = motifPageSearch(readLibraryQuery(new URLSearchParams('q=puffin&tags=spring&sort=name')), 0);
@@ -76,13 +76,16 @@ describe('the app shell', () => {
     expect(res.text.match(/index-abc\.js/g)).toHaveLength(1);
   });
 
-  it('names only the session check on other pages, and nothing on the password reset page', async () => {
-    expect(linksIn((await request(app).get('/products').expect(200)).text)).toEqual(['preload /api/auth/me']);
+  it('names only the session check on other pages and without a session, and nothing on the password reset page', async () => {
+    expect(linksIn((await request(app).get('/products').set('Cookie', 'motifold.sid=s%3Aabc').expect(200)).text)).toEqual(['preload /api/auth/me']);
+    const signedOut = linksIn((await request(app).get('/library').expect(200)).text);
+    expect(signedOut.filter((l) => l.startsWith('preload'))).toEqual(['preload /api/auth/me']);
     expect(linksIn((await request(app).get('/reset-password?token=abc').expect(200)).text)).toEqual([]);
   });
 
   it('writes an address\'s odd characters into the shell only as escaped URL text', async () => {
-    const res = await request(app).get('/library?q=%22%3E%3Cscript%3Ealert(1)%3C/script%3E').expect(200);
+    const res = await request(app).get('/library?q=%22%3E%3Cscript%3Ealert(1)%3C/script%3E').set('Cookie', 'motifold.sid=s%3Aabc').expect(200);
+    expect(res.text).toContain('/api/motifs?q=%22%3E%3Cscript%3Ealert%281%29%3C%2Fscript%3E');
     expect(res.text).not.toContain('<script>alert');
     expect(res.text.match(/<script/g)).toHaveLength(1);
   });
