@@ -11,10 +11,10 @@ afterEach(() => {
   vi.unstubAllGlobals();
 });
 
-const renderNotice = () =>
+const renderNotice = (firstCheckAfterMs = 0) =>
   render(
     <QueryClientProvider client={testQueryClient()}>
-      <ServiceNotice />
+      <ServiceNotice firstCheckAfterMs={firstCheckAfterMs} />
       <p>page</p>
     </QueryClientProvider>,
   );
@@ -28,6 +28,14 @@ describe('service notice', () => {
     const notice = await screen.findByRole('status');
     expect(notice.textContent).toContain('uploading and opening files');
     expect(notice.textContent).not.toContain('sending e-mail');
+  });
+
+  it('waits for the page to load before checking', async () => {
+    const api = fakeApi({ 'GET /api/health': { body: { status: 'ok', services: { database: 'up', storage: 'up', mail: 'up' } } } });
+    renderNotice(200);
+    await new Promise((resolve) => setTimeout(resolve, 100));
+    expect(api.calls).toHaveLength(0);
+    await vi.waitFor(() => expect(api.calls).toHaveLength(1));
   });
 
   it('stays out of the way while everything is up', async () => {

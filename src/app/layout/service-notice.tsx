@@ -1,3 +1,4 @@
+import { useEffect, useState } from 'react';
 import { StatusMessage } from '../../components/ui/status-message';
 import { useHealth } from '../../features/health/api/get-health';
 
@@ -7,9 +8,19 @@ const serviceWords = {
   mail: 'sending e-mail (invitations and password links)',
 } as const;
 
+// The check pings storage and mail, so it waits until the page's own requests (a screen of
+// thumbnails) have had the connection first.
+const FIRST_CHECK_AFTER_MS = 2500;
+
 // Quiet unless something is down; a failed health check itself is not worth a banner.
-export function ServiceNotice() {
-  const health = useHealth();
+export function ServiceNotice({ firstCheckAfterMs = FIRST_CHECK_AFTER_MS }: { firstCheckAfterMs?: number }) {
+  const [due, setDue] = useState(firstCheckAfterMs <= 0);
+  useEffect(() => {
+    if (due) return;
+    const timer = setTimeout(() => setDue(true), firstCheckAfterMs);
+    return () => clearTimeout(timer);
+  }, [due, firstCheckAfterMs]);
+  const health = useHealth(due);
   if (!health.data || health.data.status === 'ok') return null;
   const down = (Object.keys(serviceWords) as Array<keyof typeof serviceWords>).filter(
     (service) => health.data.services[service] === 'down',

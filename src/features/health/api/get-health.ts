@@ -17,6 +17,6 @@ export const healthQueryOptions = () =>
     retry: false,
   });
 
-export function useHealth() {
-  return useQuery(healthQueryOptions());
+export function useHealth(enabled = true) {
+  return useQuery({ ...healthQueryOptions(), enabled });
 }
