@@ -1,5 +1,8 @@
 import { invert, type Affine, type Rect } from '../../../shared/geometry';
+import { endianness } from 'node:os';
 import type { RgbaImage } from './rgba-image';
+
+const LITTLE_ENDIAN = endianness() === 'LE';
 
 export type SourcePixels = { data: Uint8Array | Uint8ClampedArray; width: number; height: number };
 
@@ -41,6 +44,7 @@ export function sampleRows(source: SourcePixels, matrix: Affine, box: PixelBoxLi
   if (!inverse) return;
   const width = box.right - box.left;
   const out = new Uint8Array(width * 4);
+  const out32 = new Uint32Array(out.buffer);
   const [ia, ib, ic, id, ie, iff] = inverse;
   const src = source.data;
   const sw = source.width;
@@ -57,7 +61,7 @@ export function sampleRows(source: SourcePixels, matrix: Affine, box: PixelBoxLi
     out.fill(0, t0 * 4, t1 * 4);
     for (let x = t0; x < t1; x++) {
       if (x === f0 && f1 > f0) {
-        interiorRun(src, sw, out, 0, u0, v0, ia, ib, f0, f1);
+        interiorRun(src, sw, out, out32, u0, v0, ia, ib, f0, f1);
         x = f1 - 1;
         continue;
       }
@@ -84,7 +88,7 @@ function span(c0: number, k: number, lo: number, hi: number, within: [number, nu
 }
 
 /** All four taps inside the source: no bounds checks. */
-function interiorRun(src: Uint8Array | Uint8ClampedArray, sw: number, out: Uint8Array, row: number, u0: number, v0: number, ia: number, ib: number, from: number, to: number): void {
+function interiorRun(src: Uint8Array | Uint8ClampedArray, sw: number, out: Uint8Array, out32: Uint32Array, u0: number, v0: number, ia: number, ib: number, from: number, to: number): void {
   for (let x = from; x < to; x++) {
     const u = u0 + ia * x;
     const v = v0 + ib * x;
@@ -96,7 +100,7 @@ function interiorRun(src: Uint8Array | Uint8ClampedArray, sw: number, out: Uint8
     const i01 = i00 + 4;
     const i10 = i00 + sw * 4;
     const i11 = i10 + 4;
-    const o = row + x * 4;
+    const o = x * 4;
     if ((src[i00 + 3] | src[i01 + 3] | src[i10 + 3] | src[i11 + 3]) === 0) continue;
     if ((src[i00 + 3] & src[i01 + 3] & src[i10 + 3] & src[i11 + 3]) === 255) {
       // all four taps opaque: premultiplied and straight colour are the same, no division
@@ -104,10 +108,12 @@ function interiorRun(src: Uint8Array | Uint8ClampedArray, sw: number, out: Uint8
       const g01 = fx * (1 - fy);
       const g10 = (1 - fx) * fy;
       const g11 = fx * fy;
-      out[o] = g00 * src[i00] + g01 * src[i01] + g10 * src[i10] + g11 * src[i11] + 0.5;
-      out[o + 1] = g00 * src[i00 + 1] + g01 * src[i01 + 1] + g10 * src[i10 + 1] + g11 * src[i11 + 1] + 0.5;
-      out[o + 2] = g00 * src[i00 + 2] + g01 * src[i01 + 2] + g10 * src[i10 + 2] + g11 * src[i11 + 2] + 0.5;
-      out[o + 3] = 255;
+      // one word with the bytes in RGBA order; each sum is in [0.5, 255.5],
+      // so | 0 truncates it exactly as a byte store would
+      const r = (g00 * src[i00] + g01 * src[i01] + g10 * src[i10] + g11 * src[i11] + 0.5) | 0;
+      const g = (g00 * src[i00 + 1] + g01 * src[i01 + 1] + g10 * src[i10 + 1] + g11 * src[i11 + 1] + 0.5) | 0;
+      const b = (g00 * src[i00 + 2] + g01 * src[i01 + 2] + g10 * src[i10 + 2] + g11 * src[i11 + 2] + 0.5) | 0;
+      out32[x] = LITTLE_ENDIAN ? (r | (g << 8) | (b << 16) | 0xff000000) >>> 0 : ((r << 24) | (g << 16) | (b << 8) | 0xff) >>> 0;
       continue;
     }
     const w00 = (1 - fx) * (1 - fy) * src[i00 + 3];

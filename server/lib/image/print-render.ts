@@ -4,7 +4,7 @@ import type { Rect } from '../../../shared/geometry';
 import type { MotifDrawOp, RenderPlan, TextDrawOp } from '../../../shared/scene';
 import type { SourcePixels } from './affine-sample';
 import { compositeOnto } from './composite-rgba';
-import { drawMotifOnto } from './motif-layer';
+import { drawPreparedMotif, prepareMotif, type PreparedMotif } from './motif-layer';
 import type { RgbaImage } from './rgba-image';
 
 export { motifLayer } from './motif-layer';
@@ -25,7 +25,8 @@ export type PrintRenderNote = { placementId: string; code: 'render.text_skipped'
 
 export type PrintRender = { image: RgbaImage; notes: PrintRenderNote[] };
 
-// Sources fetched and decoded ahead of the op being drawn, so storage and decoding overlap drawing.
+// Sources fetched, decoded and pre-reduced ahead of the op being drawn, so storage, decoding and
+// sharp's resizing (on libvips' threads) overlap the JS drawing of the op before.
 const LOAD_AHEAD = 3;
 
 const quiet = <T>(p: Promise<T>) => {
@@ -55,6 +56,15 @@ export async function renderPrintFile(plan: RenderPlan, options: PrintRenderOpti
     }
     return p;
   };
+  const prepared = new Map<number, Promise<PreparedMotif>>();
+  const preparedMotif = (i: number, op: MotifDrawOp) => {
+    let p = prepared.get(i);
+    if (!p) {
+      p = quiet(motifSource(op).then((px) => prepareMotif(px, op)));
+      prepared.set(i, p);
+    }
+    return p;
+  };
   // Text is rasterised by librsvg on sharp's threads: all of it starts at once.
   const texts = new Map<number, Promise<RgbaImage | null>>();
   plan.ops.forEach((op, i) => {
@@ -62,11 +72,15 @@ export async function renderPrintFile(plan: RenderPlan, options: PrintRenderOpti
   });
 
   for (let i = 0; i < plan.ops.length; i++) {
-    for (const ahead of plan.ops.slice(i, i + LOAD_AHEAD + 1)) if (ahead.kind === 'motif') void motifSource(ahead);
+    for (let k = i; k < Math.min(plan.ops.length, i + LOAD_AHEAD + 1); k++) {
+      const ahead = plan.ops[k];
+      if (ahead.kind === 'motif') void preparedMotif(k, ahead);
+    }
     const op = plan.ops[i];
     const composite = { blendMode: op.blendMode, opacity: op.opacity };
     if (op.kind === 'motif') {
-      await drawMotifOnto(canvas, await motifSource(op), op, clipOf(op.clip, whole), composite);
+      drawPreparedMotif(canvas, await preparedMotif(i, op), clipOf(op.clip, whole), composite);
+      prepared.delete(i);
     } else if (options.drawText) {
       const layer = await texts.get(i)!;
       if (layer) compositeOnto(canvas, layer, composite);
