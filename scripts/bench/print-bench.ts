@@ -9,7 +9,7 @@ import { mug11oz, templateGeometry } from '../../shared/templates';
 import { WRAP_VIEWS } from '../../shared/wrap';
 import type { SourcePixels } from '../../server/lib/image/affine-sample';
 import { renderMugPreview } from '../../server/lib/image/mug-preview';
-import { PRINT_PNG_OPTIONS, renderAndEncodePrintFile } from '../../server/lib/image/print-file-encode';
+import { encodePrintFile, PRINT_PNG_OPTIONS } from '../../server/lib/image/print-file-encode';
 import { motifLayer, renderPrintFile } from '../../server/lib/image/print-render';
 
 export type PrintBenchResult = {
@@ -77,10 +77,9 @@ export async function benchPrint(runs = 3): Promise<PrintBenchResult> {
   const { plan, motifs } = demoPlan();
   const loadMotif = async (id: string) => motifs.get(id)!;
 
-  // ours: the export job's own path (drawing and PNG compression overlap, band by band)
   const ours = await best(runs, async () => {
-    const { render, encoded } = await renderAndEncodePrintFile(mug11oz.output, (onRows) => renderPrintFile(plan, { loadMotif, onRows }));
-    return { image: render.image, encoded };
+    const { image } = await renderPrintFile(plan, { loadMotif });
+    return { image, encoded: await encodePrintFile(image, mug11oz.output) };
   });
 
   // The peer: the same layers already transformed (not timed), composited and encoded by sharp.

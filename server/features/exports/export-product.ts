@@ -1,4 +1,4 @@
-import { encodePrintFile, renderAndEncodePrintFile } from '../../lib/image/print-file-encode';
+import { encodePrintFile } from '../../lib/image/print-file-encode';
 import { buildProofSheet } from '../../lib/pdf/proof-sheet';
 import type { ObjectStorage } from '../../lib/storage';
 import type { ExportFile } from '../../db/schema/index';
@@ -38,7 +38,8 @@ export function createExportRunner(deps: ExportRunnerDeps) {
     const missing = missingMotifs(sources);
     if (missing.length) throw new ExportFailure('export.missing_motif', `${missing.length} placement(s) use a motif version that is no longer in the library; replace them, then export again.`);
     const bundle = row.kind === 'bundle';
-    const { render, encoded } = await renderAndEncodePrintFile(sources.template.output, (onRows) => renderProduct(sources, { onProgress: (d) => progress(0.05 + d * (bundle ? 0.35 : 0.8)), onRows }));
+    const render = await renderProduct(sources, { onProgress: (d) => progress(0.05 + d * (bundle ? 0.35 : 0.8)) });
+    const encoded = await encodePrintFile(render.image, sources.template.output);
     const maxBytes = sources.template.output.maxFileSizeMb * 1024 * 1024;
     if (encoded.buffer.length > maxBytes) throw new ExportFailure('export.too_large', `The print file is ${(encoded.buffer.length / 1048576).toFixed(1)} MB; this printer takes at most ${sources.template.output.maxFileSizeMb} MB.`);
     const printName = `print-file.${encoded.extension}`;

@@ -1,7 +1,7 @@
 import { compose, scale } from '../../../shared/geometry';
 import { createScene, renderPlan, type RenderPlan, type Scene } from '../../../shared/scene';
 import type { Template } from '../../../shared/templates';
-import { decodeMotifPng, renderPrintFile, type LoadMotifPixels, type PrintRender, type PrintRenderOptions } from '../../lib/image/print-render';
+import { decodeMotifPng, renderPrintFile, type LoadMotifPixels, type PrintRender } from '../../lib/image/print-render';
 import type { SourcePixels } from '../../lib/image/affine-sample';
 import { drawTextLayer } from '../../lib/image/text-layer';
 import type { ObjectStorage } from '../../lib/storage';
@@ -63,9 +63,9 @@ export function scaledPlan(plan: RenderPlan, k: number): RenderPlan {
 }
 
 /** The print file (k = 1) or a smaller render of it whose longer side is at most maxSide. */
-export async function renderProduct(sources: ProductSources, options: Pick<PrintRenderOptions, 'onProgress' | 'onRows'> & { maxSide?: number } = {}): Promise<PrintRender> {
+export async function renderProduct(sources: ProductSources, options: { maxSide?: number; onProgress?: (done: number) => void | Promise<void> } = {}): Promise<PrintRender> {
   const plan = renderPlan(sources.scene, sources.template);
   const longest = Math.max(plan.size.width, plan.size.height);
   const k = options.maxSide && longest > options.maxSide ? options.maxSide / longest : 1;
-  return renderPrintFile(k === 1 ? plan : scaledPlan(plan, k), { loadMotif: sources.loadMotif, drawText: drawTextLayer, onProgress: options.onProgress, onRows: options.onRows });
+  return renderPrintFile(k === 1 ? plan : scaledPlan(plan, k), { loadMotif: sources.loadMotif, drawText: drawTextLayer, onProgress: options.onProgress });
 }

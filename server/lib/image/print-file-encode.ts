@@ -1,8 +1,6 @@
 import sharp from 'sharp';
 import { crc32 } from 'node:zlib';
 import type { OutputSpec } from '../../../shared/templates';
-import type { PrintRender } from './print-render';
-import { pngRowStream, type PngRowStream } from './print-png-stream';
 import type { RgbaImage } from './rgba-image';
 
 export type EncodedPrintFile = { buffer: Buffer; contentType: 'image/png' | 'image/jpeg'; extension: 'png' | 'jpg' };
@@ -33,28 +31,6 @@ export async function encodePrintFile(image: RgbaImage, output: OutputSpec): Pro
   }
   const png = await pipeline.png(PRINT_PNG_OPTIONS).toBuffer();
   return { buffer: withSrgbChunk(png), contentType: 'image/png', extension: 'png' };
-}
-
-type RowSink = (canvas: RgbaImage, top: number, bottom: number) => Promise<void>;
-
-/**
- * Renders and encodes the print file. A PNG that keeps transparency is compressed band by band
- * as the renderer finishes them (print-png-stream.ts, the same zlib level and no filtering), so
- * encoding runs beside drawing instead of after it; other outputs are encoded by sharp after the
- * render (encodePrintFile). `render` passes the sink on to renderPrintFile's onRows.
- */
-export async function renderAndEncodePrintFile(output: OutputSpec, render: (onRows?: RowSink) => Promise<PrintRender>): Promise<{ render: PrintRender; encoded: EncodedPrintFile }> {
-  if (output.format !== 'png' || output.transparency === 'flatten') {
-    const done = await render();
-    return { render: done, encoded: await encodePrintFile(done.image, output) };
-  }
-  let stream: PngRowStream | null = null;
-  const done = await render((canvas, top, bottom) => {
-    stream ??= pngRowStream(canvas.width, canvas.height, { dpi: output.dpi, level: PRINT_PNG_OPTIONS.compressionLevel });
-    return stream.writeRows(canvas, top, bottom);
-  });
-  const buffer = stream ? await (stream as PngRowStream).finish() : (await encodePrintFile(done.image, output)).buffer;
-  return { render: done, encoded: { buffer, contentType: 'image/png', extension: 'png' } };
 }
 
 // PNG signature (8 bytes) then IHDR: 4 length + 4 type + 13 data + 4 CRC.

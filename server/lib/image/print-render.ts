@@ -19,16 +19,14 @@ export type PrintRenderOptions = {
   drawText?: DrawTextLayer;
   /** 0..1 as sources are ready and bands drawn, for a job's progress. */
   onProgress?: (done: number) => void | Promise<void>;
-  /** Rows [top, bottom) of the canvas are final (called top to bottom), e.g. to encode them at once. */
-  onRows?: (canvas: RgbaImage, top: number, bottom: number) => void | Promise<void>;
 };
 
 export type PrintRenderNote = { placementId: string; code: 'render.text_skipped' | 'render.empty'; message: string };
 
 export type PrintRender = { image: RgbaImage; notes: PrintRenderNote[] };
 
-// Rows drawn at a time: small enough that the encoder starts early, large enough that the
-// per-band costs (boxes, one hand-over to the encoder) stay small.
+// Rows drawn at a time: few enough that a band of canvas stays in cache while every op is drawn
+// into it, enough that the per-band costs (boxes, a sampler set-up per op) stay small.
 const BAND_ROWS = 64;
 
 // The share of onProgress given to fetching and preparing sources; drawing has the rest.
@@ -101,12 +99,11 @@ export async function renderPrintFile(plan: RenderPlan, options: PrintRenderOpti
     await options.onProgress?.(((i + 1) / plan.ops.length) * LOAD_SHARE);
   }
   // ... then drawn band by band, all ops in plan order within each band: every pixel still sees the
-  // ops in order, so the pixels are those of drawing op by op, and a band is finished as soon as
-  // it is drawn (onRows), so the PNG encoder can compress it while the next band is drawn.
+  // ops in order, so the pixels are those of drawing op by op, while the canvas rows being written
+  // (a band is 650 kB on the 11 oz mug wrap) stay in the processor's cache across all ops.
   for (let top = 0; top < height; top += BAND_ROWS) {
     const bottom = Math.min(height, top + BAND_ROWS);
     for (const layer of layers) drawBand(canvas, layer, top, bottom);
-    await options.onRows?.(canvas, top, bottom);
     await options.onProgress?.(LOAD_SHARE + ((bottom / height) * (1 - LOAD_SHARE)));
   }
   return { image: canvas, notes };
