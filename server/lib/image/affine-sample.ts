@@ -1,5 +1,8 @@
 import { invert, type Affine, type Rect } from '../../../shared/geometry';
+import { endianness } from 'node:os';
 import type { RgbaImage } from './rgba-image';
+
+const LITTLE_ENDIAN = endianness() === 'LE';
 
 export type SourcePixels = { data: Uint8Array | Uint8ClampedArray; width: number; height: number };
 
@@ -41,10 +44,12 @@ export function sampleRows(source: SourcePixels, matrix: Affine, box: PixelBoxLi
   if (!inverse) return;
   const width = box.right - box.left;
   const out = new Uint8Array(width * 4);
+  const out32 = new Uint32Array(out.buffer);
   const [ia, ib, ic, id, ie, iff] = inverse;
   const src = source.data;
   const sw = source.width;
   const sh = source.height;
+  const src32 = LITTLE_ENDIAN && src.byteOffset % 4 === 0 ? new Uint32Array(src.buffer, src.byteOffset, sw * sh) : null;
   for (let y = box.top; y < box.bottom; y++) {
     const ty = y + 0.5;
     // Source coordinates of the row's first centre, moved by (ia, ib) per output pixel.
@@ -57,7 +62,8 @@ export function sampleRows(source: SourcePixels, matrix: Affine, box: PixelBoxLi
     out.fill(0, t0 * 4, t1 * 4);
     for (let x = t0; x < t1; x++) {
       if (x === f0 && f1 > f0) {
-        interiorRun(src, sw, out, 0, u0, v0, ia, ib, f0, f1);
+        if (src32) interiorRunWords(src32, sw, out, out32, u0, v0, ia, ib, f0, f1);
+        else interiorRun(src, sw, out, out32, u0, v0, ia, ib, f0, f1);
         x = f1 - 1;
         continue;
       }
@@ -84,7 +90,7 @@ function span(c0: number, k: number, lo: number, hi: number, within: [number, nu
 }
 
 /** All four taps inside the source: no bounds checks. */
-function interiorRun(src: Uint8Array | Uint8ClampedArray, sw: number, out: Uint8Array, row: number, u0: number, v0: number, ia: number, ib: number, from: number, to: number): void {
+function interiorRun(src: Uint8Array | Uint8ClampedArray, sw: number, out: Uint8Array, out32: Uint32Array, u0: number, v0: number, ia: number, ib: number, from: number, to: number): void {
   for (let x = from; x < to; x++) {
     const u = u0 + ia * x;
     const v = v0 + ib * x;
@@ -96,7 +102,7 @@ function interiorRun(src: Uint8Array | Uint8ClampedArray, sw: number, out: Uint8
     const i01 = i00 + 4;
     const i10 = i00 + sw * 4;
     const i11 = i10 + 4;
-    const o = row + x * 4;
+    const o = x * 4;
     if ((src[i00 + 3] | src[i01 + 3] | src[i10 + 3] | src[i11 + 3]) === 0) continue;
     if ((src[i00 + 3] & src[i01 + 3] & src[i10 + 3] & src[i11 + 3]) === 255) {
       // all four taps opaque: premultiplied and straight colour are the same, no division
@@ -104,10 +110,12 @@ function interiorRun(src: Uint8Array | Uint8ClampedArray, sw: number, out: Uint8
       const g01 = fx * (1 - fy);
       const g10 = (1 - fx) * fy;
       const g11 = fx * fy;
-      out[o] = g00 * src[i00] + g01 * src[i01] + g10 * src[i10] + g11 * src[i11] + 0.5;
-      out[o + 1] = g00 * src[i00 + 1] + g01 * src[i01 + 1] + g10 * src[i10 + 1] + g11 * src[i11 + 1] + 0.5;
-      out[o + 2] = g00 * src[i00 + 2] + g01 * src[i01 + 2] + g10 * src[i10 + 2] + g11 * src[i11 + 2] + 0.5;
-      out[o + 3] = 255;
+      // one word with the bytes in RGBA order; each sum is in [0.5, 255.5],
+      // so | 0 truncates it exactly as a byte store would
+      const r = (g00 * src[i00] + g01 * src[i01] + g10 * src[i10] + g11 * src[i11] + 0.5) | 0;
+      const g = (g00 * src[i00 + 1] + g01 * src[i01 + 1] + g10 * src[i10 + 1] + g11 * src[i11 + 1] + 0.5) | 0;
+      const b = (g00 * src[i00 + 2] + g01 * src[i01 + 2] + g10 * src[i10 + 2] + g11 * src[i11 + 2] + 0.5) | 0;
+      out32[x] = LITTLE_ENDIAN ? (r | (g << 8) | (b << 16) | 0xff000000) >>> 0 : ((r << 24) | (g << 16) | (b << 8) | 0xff) >>> 0;
       continue;
     }
     const w00 = (1 - fx) * (1 - fy) * src[i00 + 3];
@@ -120,6 +128,54 @@ function interiorRun(src: Uint8Array | Uint8ClampedArray, sw: number, out: Uint8
     out[o] = (w00 * src[i00] + w01 * src[i01] + w10 * src[i10] + w11 * src[i11]) * inv + 0.5;
     out[o + 1] = (w00 * src[i00 + 1] + w01 * src[i01 + 1] + w10 * src[i10 + 1] + w11 * src[i11 + 1]) * inv + 0.5;
     out[o + 2] = (w00 * src[i00 + 2] + w01 * src[i01 + 2] + w10 * src[i10 + 2] + w11 * src[i11 + 2]) * inv + 0.5;
+    out[o + 3] = al + 0.5;
+  }
+}
+
+/**
+ * interiorRun reading each tap as one little-endian word (R in the low byte, alpha in the top
+ * one): a quarter of the loads, the same arithmetic in the same order, so the same bytes.
+ */
+function interiorRunWords(src: Uint32Array, sw: number, out: Uint8Array, out32: Uint32Array, u0: number, v0: number, ia: number, ib: number, from: number, to: number): void {
+  for (let x = from; x < to; x++) {
+    const u = u0 + ia * x;
+    const v = v0 + ib * x;
+    const x0 = u | 0;
+    const y0 = v | 0;
+    const fx = u - x0;
+    const fy = v - y0;
+    const j00 = y0 * sw + x0;
+    const p00 = src[j00];
+    const p01 = src[j00 + 1];
+    const p10 = src[j00 + sw];
+    const p11 = src[j00 + sw + 1];
+    const a00 = p00 >>> 24;
+    const a01 = p01 >>> 24;
+    const a10 = p10 >>> 24;
+    const a11 = p11 >>> 24;
+    if ((a00 | a01 | a10 | a11) === 0) continue;
+    if ((a00 & a01 & a10 & a11) === 255) {
+      const g00 = (1 - fx) * (1 - fy);
+      const g01 = fx * (1 - fy);
+      const g10 = (1 - fx) * fy;
+      const g11 = fx * fy;
+      const r = (g00 * (p00 & 255) + g01 * (p01 & 255) + g10 * (p10 & 255) + g11 * (p11 & 255) + 0.5) | 0;
+      const g = (g00 * ((p00 >>> 8) & 255) + g01 * ((p01 >>> 8) & 255) + g10 * ((p10 >>> 8) & 255) + g11 * ((p11 >>> 8) & 255) + 0.5) | 0;
+      const b = (g00 * ((p00 >>> 16) & 255) + g01 * ((p01 >>> 16) & 255) + g10 * ((p10 >>> 16) & 255) + g11 * ((p11 >>> 16) & 255) + 0.5) | 0;
+      out32[x] = (r | (g << 8) | (b << 16) | 0xff000000) >>> 0;
+      continue;
+    }
+    const w00 = (1 - fx) * (1 - fy) * a00;
+    const w01 = fx * (1 - fy) * a01;
+    const w10 = (1 - fx) * fy * a10;
+    const w11 = fx * fy * a11;
+    const al = w00 + w01 + w10 + w11;
+    if (al <= 0) continue;
+    const inv = 1 / al;
+    const o = x * 4;
+    out[o] = (w00 * (p00 & 255) + w01 * (p01 & 255) + w10 * (p10 & 255) + w11 * (p11 & 255)) * inv + 0.5;
+    out[o + 1] = (w00 * ((p00 >>> 8) & 255) + w01 * ((p01 >>> 8) & 255) + w10 * ((p10 >>> 8) & 255) + w11 * ((p11 >>> 8) & 255)) * inv + 0.5;
+    out[o + 2] = (w00 * ((p00 >>> 16) & 255) + w01 * ((p01 >>> 16) & 255) + w10 * ((p10 >>> 16) & 255) + w11 * ((p11 >>> 16) & 255)) * inv + 0.5;
     out[o + 3] = al + 0.5;
   }
 }

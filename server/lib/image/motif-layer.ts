@@ -21,13 +21,21 @@ function reducedSize(source: SourcePixels, matrix: Affine): { width: number; hei
   return { width: Math.max(1, Math.round(source.width * k)), height: Math.max(1, Math.round(source.height * k)) };
 }
 
+/** A motif ready to sample: its pixels (the source, or its Lanczos reduction) and their matrix. */
+export type PreparedMotif = { pixels: SourcePixels; matrix: Affine };
+
 /**
- * Draws one motif straight onto the canvas: each template row of its box is sampled (bilinear on
- * premultiplied colour, affine-sample.ts) and composited at once, so no layer of the motif's
- * size is ever held. Large reductions go through sharp's Lanczos filter first.
+ * The sharp half of drawing a motif (the Lanczos pre-reduce, on libvips' threads). The print
+ * renderer starts it for the ops ahead, so it runs while JS composites the op before.
  */
-export async function drawMotifOnto(canvas: RgbaImage, source: SourcePixels, op: Placed, clip: Rect, composite: CompositeOptions): Promise<void> {
-  const { pixels, matrix } = await samplingSource(source, op);
+export const prepareMotif = (source: SourcePixels, op: Placed): Promise<PreparedMotif> => samplingSource(source, op);
+
+/**
+ * Draws one prepared motif straight onto the canvas: each template row of its box is sampled
+ * (bilinear on premultiplied colour, affine-sample.ts) and composited at once, so no layer of the
+ * motif's size is ever held.
+ */
+export function drawPreparedMotif(canvas: RgbaImage, { pixels, matrix }: PreparedMotif, clip: Rect, composite: CompositeOptions): void {
   const box = transformedBox(matrix, pixels.width, pixels.height, clip);
   if (!box) return;
   const row: RgbaImage = { data: new Uint8Array(0), width: 0, height: 1, left: 0, top: 0 };
@@ -40,6 +48,11 @@ export async function drawMotifOnto(canvas: RgbaImage, source: SourcePixels, op:
   });
 }
 
+/** Prepares and draws one motif (large reductions go through sharp's Lanczos filter first). */
+export async function drawMotifOnto(canvas: RgbaImage, source: SourcePixels, op: Placed, clip: Rect, composite: CompositeOptions): Promise<void> {
+  drawPreparedMotif(canvas, await prepareMotif(source, op), clip, composite);
+}
+
 /** The same motif as a layer of template pixels inside `clip` (same box and samples), for callers that composite it themselves. */
 export async function motifLayer(source: SourcePixels, op: Placed, clip: Rect): Promise<RgbaImage | null> {
   const { pixels, matrix } = await samplingSource(source, op);
@@ -47,7 +60,7 @@ export async function motifLayer(source: SourcePixels, op: Placed, clip: Rect): 
 }
 
 /** The pixels to sample and their matrix: the source itself, or its Lanczos reduction when the op shrinks it a lot. */
-async function samplingSource(source: SourcePixels, op: Placed): Promise<{ pixels: SourcePixels; matrix: Affine }> {
+async function samplingSource(source: SourcePixels, op: Placed): Promise<PreparedMotif> {
   const matrix = pixelMatrix(source, op);
   const reduced = reducedSize(source, matrix);
   if (!reduced) return { pixels: source, matrix };

@@ -9,7 +9,8 @@ import { compose, radians, rotate, scale, translate, type Affine } from '../../.
 import type { BlendMode, MotifDrawOp, RenderPlan } from '../../../shared/scene';
 import { mug11oz } from '../../../shared/templates';
 import { encodePrintFile, pngChunkTypes } from './print-file-encode';
-import { renderPrintFile } from './print-render';
+import { compositeOnto } from './composite-rgba';
+import { motifLayer, renderPrintFile } from './print-render';
 
 function solid(width: number, height: number, rgba: [number, number, number, number]) {
   const data = new Uint8Array(width * height * 4);
@@ -66,6 +67,23 @@ describe('print file renderer', () => {
     const { image } = await renderPrintFile(plan, { loadMotif: async () => solid(20, 10, [255, 255, 255, 255]) });
     expect(px(image, 5, 5)).toEqual([0x2e, 0x5e, 0x8c, 255]);
     expect(px(image, 15, 5)[3]).toBe(0);
+  });
+
+  it('draws band by band the same pixels as compositing each whole transformed layer in turn', async () => {
+    // 150 rows: three bands of the renderer, with turned motifs crossing both band edges
+    const motif = { data: new Uint8Array(90 * 90 * 4), width: 90, height: 90 };
+    for (let i = 0; i < motif.data.length; i += 4) motif.data.set([(i * 7) % 256, (i * 3) % 256, 120, i % 5 === 0 ? 90 : 255], i);
+    const modes: BlendMode[] = ['normal', 'multiply', 'overlay', 'normal'];
+    const ops = modes.map((blendMode, i) => op(`m${i}`, compose(translate(-45, -45), scale(1.4 - 0.25 * i), rotate(radians(0.4 * i + 0.1)), translate(60 + 60 * i, 75)), 90, 90, { blendMode, opacity: i === 3 ? 0.7 : 1, clip: { x: 0, y: 3, width: 300, height: 140 } }));
+    const plan: RenderPlan = { size: { width: 300, height: 150 }, notes: [], ops };
+    const { image } = await renderPrintFile(plan, { loadMotif: async () => motif });
+    const expected = { data: new Uint8Array(300 * 150 * 4), width: 300, height: 150, left: 0, top: 0 };
+    for (const o of ops) {
+      const layer = await motifLayer(motif, o, o.clip!);
+      if (layer) compositeOnto(expected, layer, { blendMode: o.blendMode, opacity: o.opacity });
+    }
+    expect(Buffer.compare(Buffer.from(image.data), Buffer.from(expected.data))).toBe(0);
+    expect(image.data.some((v, i) => i % 4 === 3 && v > 0 && Math.floor(i / 4 / 300) === 64)).toBe(true);
   });
 
   it('reports text placements it cannot draw rather than dropping them silently', async () => {

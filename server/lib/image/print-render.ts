@@ -3,8 +3,8 @@ import { applyRecolour, type Recolour } from '../../../shared/colour';
 import type { Rect } from '../../../shared/geometry';
 import type { MotifDrawOp, RenderPlan, TextDrawOp } from '../../../shared/scene';
 import type { SourcePixels } from './affine-sample';
-import { compositeOnto } from './composite-rgba';
-import { drawMotifOnto } from './motif-layer';
+import { compositeOnto, type CompositeOptions } from './composite-rgba';
+import { drawPreparedMotif, prepareMotif, type PreparedMotif } from './motif-layer';
 import type { RgbaImage } from './rgba-image';
 
 export { motifLayer } from './motif-layer';
@@ -17,7 +17,7 @@ export type PrintRenderOptions = {
   loadMotif: LoadMotifPixels;
   /** Text drawn as outlines; without it text placements are left out and reported. */
   drawText?: DrawTextLayer;
-  /** 0..1 after each op, for a job's progress. */
+  /** 0..1 as sources are ready and bands drawn, for a job's progress. */
   onProgress?: (done: number) => void | Promise<void>;
 };
 
@@ -25,7 +25,15 @@ export type PrintRenderNote = { placementId: string; code: 'render.text_skipped'
 
 export type PrintRender = { image: RgbaImage; notes: PrintRenderNote[] };
 
-// Sources fetched and decoded ahead of the op being drawn, so storage and decoding overlap drawing.
+// Rows drawn at a time: few enough that a band of canvas stays in cache while every op is drawn
+// into it, enough that the per-band costs (boxes, a sampler set-up per op) stay small.
+const BAND_ROWS = 64;
+
+// The share of onProgress given to fetching and preparing sources; drawing has the rest.
+const LOAD_SHARE = 0.5;
+
+// Sources fetched, decoded and pre-reduced ahead of the op being drawn, so storage, decoding and
+// sharp's resizing (on libvips' threads) overlap the JS drawing of the op before.
 const LOAD_AHEAD = 3;
 
 const quiet = <T>(p: Promise<T>) => {
@@ -55,27 +63,68 @@ export async function renderPrintFile(plan: RenderPlan, options: PrintRenderOpti
     }
     return p;
   };
+  const prepared = new Map<number, Promise<PreparedMotif>>();
+  const preparedMotif = (i: number, op: MotifDrawOp) => {
+    let p = prepared.get(i);
+    if (!p) {
+      p = quiet(motifSource(op).then((px) => prepareMotif(px, op)));
+      prepared.set(i, p);
+    }
+    return p;
+  };
   // Text is rasterised by librsvg on sharp's threads: all of it starts at once.
   const texts = new Map<number, Promise<RgbaImage | null>>();
   plan.ops.forEach((op, i) => {
     if (op.kind === 'text' && options.drawText) texts.set(i, quiet(options.drawText(op, clipOf(op.clip, whole))));
   });
 
+  // Every op's pixels first (fetches and sharp's work a few ops ahead of the one awaited) ...
+  const layers: Layer[] = [];
   for (let i = 0; i < plan.ops.length; i++) {
-    for (const ahead of plan.ops.slice(i, i + LOAD_AHEAD + 1)) if (ahead.kind === 'motif') void motifSource(ahead);
+    for (let k = i; k < Math.min(plan.ops.length, i + LOAD_AHEAD + 1); k++) {
+      const ahead = plan.ops[k];
+      if (ahead.kind === 'motif') void preparedMotif(k, ahead);
+    }
     const op = plan.ops[i];
     const composite = { blendMode: op.blendMode, opacity: op.opacity };
     if (op.kind === 'motif') {
-      await drawMotifOnto(canvas, await motifSource(op), op, clipOf(op.clip, whole), composite);
+      layers.push({ kind: 'motif', motif: await preparedMotif(i, op), clip: clipOf(op.clip, whole), composite });
+      prepared.delete(i);
     } else if (options.drawText) {
-      const layer = await texts.get(i)!;
-      if (layer) compositeOnto(canvas, layer, composite);
+      const image = await texts.get(i)!;
+      if (image) layers.push({ kind: 'image', image, composite });
     } else {
       notes.push({ placementId: op.placementId, code: 'render.text_skipped', message: 'Text is not drawn into print files yet; convert it to a motif' });
     }
-    await options.onProgress?.((i + 1) / plan.ops.length);
+    await options.onProgress?.(((i + 1) / plan.ops.length) * LOAD_SHARE);
+  }
+  // ... then drawn band by band, all ops in plan order within each band: every pixel still sees the
+  // ops in order, so the pixels are those of drawing op by op, while the canvas rows being written
+  // (a band is 650 kB on the 11 oz mug wrap) stay in the processor's cache across all ops.
+  for (let top = 0; top < height; top += BAND_ROWS) {
+    const bottom = Math.min(height, top + BAND_ROWS);
+    for (const layer of layers) drawBand(canvas, layer, top, bottom);
+    await options.onProgress?.(LOAD_SHARE + ((bottom / height) * (1 - LOAD_SHARE)));
   }
   return { image: canvas, notes };
+}
+
+type Layer =
+  | { kind: 'motif'; motif: PreparedMotif; clip: Rect; composite: CompositeOptions }
+  | { kind: 'image'; image: RgbaImage; composite: CompositeOptions };
+
+function drawBand(canvas: RgbaImage, layer: Layer, top: number, bottom: number): void {
+  if (layer.kind === 'motif') {
+    const clip = intersect(layer.clip, { x: 0, y: top, width: canvas.width, height: bottom - top });
+    if (clip.width > 0 && clip.height > 0) drawPreparedMotif(canvas, layer.motif, clip, layer.composite);
+    return;
+  }
+  const { image } = layer;
+  const from = Math.max(0, top - image.top);
+  const to = Math.min(image.height, bottom - image.top);
+  if (to <= from) return;
+  const rows = { ...image, data: image.data.subarray(from * image.width * 4, to * image.width * 4), height: to - from, top: image.top + from };
+  compositeOnto(canvas, rows, layer.composite);
 }
 
 const clipOf = (clip: Rect | null, whole: Rect) => (clip ? intersect(clip, whole) : whole);
