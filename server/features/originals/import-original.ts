@@ -6,7 +6,7 @@ import os from 'node:os';
 import path from 'node:path';
 import { pipeline } from 'node:stream/promises';
 import type { Database } from '../../db/client';
-import { motifs, motifVersions, originals, type ImportReport } from '../../db/schema/index';
+import { motifs, motifVersions, originals, type ImportPhase, type ImportReport } from '../../db/schema/index';
 import type { ObjectStorage } from '../../lib/storage';
 import { matchIncomingMotifs, type KnownMotif } from './motif-matching';
 import { createMotifUploads, type MotifUploads } from './motif-uploads';
@@ -70,6 +70,27 @@ function throttled(fn: (phase: UnpackProgress['phase'], percent: number) => void
   };
 }
 
+// Progress rows written one at a time in the order given, never waited for by the import: a
+// write still in flight holds back only the newest value after it, so the bar never steps back.
+function progressWriter(write: (phase: ImportPhase, percent: number) => Promise<unknown>) {
+  let busy = false;
+  let pending: [ImportPhase, number] | null = null;
+  const pump = () => {
+    if (busy || !pending) return;
+    const [phase, percent] = pending;
+    pending = null;
+    busy = true;
+    void write(phase, percent).catch(() => {}).finally(() => {
+      busy = false;
+      pump();
+    });
+  };
+  return (phase: ImportPhase, percent: number) => {
+    pending = [phase, percent];
+    pump();
+  };
+}
+
 export function createOriginalImporter({ db, repo, storage, runUnpack, earlyUnpacks, tmpRoot, onTimings }: Deps) {
   const cleanup = createOriginalsCleanup(db, storage);
   async function knownMotifsOf(originalId: string): Promise<KnownMotif[]> {
@@ -128,9 +149,8 @@ export function createOriginalImporter({ db, repo, storage, runUnpack, earlyUnpa
     const workDir = early ? null : await mkdtemp(path.join(tmpRoot ?? os.tmpdir(), 'motifold-import-'));
     const outDir = early ? early.outDir : path.join(workDir!, 'out');
     const claimMs = lap();
-    const progress = throttled((phase, percent) => {
-      void repo.setProgress(originalId, phase, (UNPACK_SHARE * Math.min(100, Math.max(0, percent))) / 100).catch(() => {});
-    });
+    const writeProgress = progressWriter((phase, percent) => repo.setProgress(originalId, phase, percent));
+    const progress = throttled((phase, percent) => writeProgress(phase, (UNPACK_SHARE * Math.min(100, Math.max(0, percent))) / 100));
     const uploads = createMotifUploads({
       storage, studioId: original.studioId, outDir, concurrency: UPLOAD_CONCURRENCY,
       studioHasPixels: (hash) => studioHasPixels(original.studioId, hash),
@@ -167,14 +187,14 @@ export function createOriginalImporter({ db, repo, storage, runUnpack, earlyUnpa
       });
       // progress writes are not waited for (they only apply while the row is importing), so
       // they cost the import no round trip
-      void repo.setProgress(originalId, 'storing', 80).catch(() => {});
+      writeProgress('storing', 80);
       const pngBytes = await uploads.store(toStore, (n) => {
-        if (n % 4 === 0) void repo.setProgress(originalId, 'storing', 80 + (15 * n) / toStore.length).catch(() => {});
+        if (n % 4 === 0) writeProgress('storing', 80 + (15 * n) / toStore.length);
       });
       // every early upload has ended before the temp files go
       await uploads.settledKeys();
       const storageMs = lap();
-      void repo.setProgress(originalId, 'finishing', 95).catch(() => {});
+      writeProgress('finishing', 95);
 
       const report: ImportReport = {
         ...result.report,
