@@ -6,6 +6,7 @@ import { createCollectionsRepository } from './collections/collections.repositor
 import { collectionsRouter } from './collections/collections.router';
 import { createCollectionsService } from './collections/collections.service';
 import { createLibraryCache } from './motifs/library-cache';
+import { libraryWarmUp } from './motifs/library-warm-up';
 import { createMotifsRepository } from './motifs/motifs.repository';
 import { motifsRouter } from './motifs/motifs.router';
 import { createMotifsService } from './motifs/motifs.service';
@@ -43,6 +44,7 @@ export function featureRouters(
   const motifs = createMotifsService({ db: db.db, repo: motifsRepo, cache: libraryCache, storage });
   const collections = createCollectionsService({ db: db.db, repo: createCollectionsRepository(db.db), cache: libraryCache });
   return [
+    libraryWarmUp(libraryCache),
     originalsRouter(originals, config),
     motifsRouter(motifs, motifsRepo, storage),
     tagsRouter(createTagsRepository(db.db)),

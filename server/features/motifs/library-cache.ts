@@ -55,15 +55,13 @@ export function createLibraryCache(db: Database, options: { maxStudios?: number 
     }
   }
 
-  return {
+  const cache = {
     // The studio's library, at least as new as every change committed before this call.
     async get(studioId: string): Promise<StudioLibrary> {
-      const version = await currentLibraryVersion(db, studioId);
-      let entry = entries.get(studioId);
-      if (!entry) {
-        entry = { library: null, refreshing: null };
-      }
+      // the entry is there before the first await, so requests arriving together share one build
+      const entry = entries.get(studioId) ?? { library: null, refreshing: null };
       touch(studioId, entry);
+      const version = await currentLibraryVersion(db, studioId);
       // Another request may be refreshing to an older version: wait, then look again.
       while (!entry.library || entry.library.version < version) {
         if (!entry.refreshing) {
@@ -76,11 +74,18 @@ export function createLibraryCache(db: Database, options: { maxStudios?: number 
       }
       return entry.library;
     },
+    // Starts building a studio's library that this process does not hold yet, without waiting:
+    // a studio's first search after a server start then finds it built or half-way there.
+    warm(studioId: string): void {
+      if (entries.has(studioId)) return;
+      cache.get(studioId).catch(() => entries.delete(studioId));
+    },
     stats: (): LibraryCacheStats => ({ ...stats, studios: entries.size }),
     forget(studioId: string) {
       entries.delete(studioId);
     },
   };
+  return cache;
 }
 
 export type LibraryCache = ReturnType<typeof createLibraryCache>;

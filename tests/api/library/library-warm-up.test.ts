@@ -1,0 +1,55 @@
+import express from 'express';
+import request from 'supertest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { createLibraryCache } from '../../../server/features/motifs/library-cache';
+import { libraryWarmUp } from '../../../server/features/motifs/library-warm-up';
+import { seedMotifs } from '../support/library-seed';
+import { createTestApp, signUpOwner, type TestApp } from '../support/test-app';
+
+let t: TestApp;
+let studioId: string;
+
+beforeAll(async () => {
+  t = await createTestApp();
+  const o = await signUpOwner(t.app, 'Saltmarsh Warm-up');
+  studioId = o.me.studio.id;
+  await seedMotifs(t.runtime.db.db, studioId, [
+    { name: 'Puffin with kite', tags: ['puffin'], colours: [{ hex: '#1d1f2a', share: 1 }] },
+    { name: 'Picnic basket', tags: ['picnic'], colours: [{ hex: '#a4502a', share: 1 }] },
+  ], { originalName: 'puffin-picnic.psd' });
+}, 60_000);
+afterAll(() => t.close());
+
+describe("a studio's search library", () => {
+  it('is built once for requests that arrive together', async () => {
+    const cache = createLibraryCache(t.runtime.db.db);
+    const [a, b, c] = await Promise.all([cache.get(studioId), cache.get(studioId), cache.get(studioId)]);
+    expect(a).toBe(b);
+    expect(b).toBe(c);
+    expect(cache.stats()).toMatchObject({ builds: 1, studios: 1 });
+  });
+
+  it('starts building on warm-up, and the first search shares that build', async () => {
+    const cache = createLibraryCache(t.runtime.db.db);
+    cache.warm(studioId);
+    cache.warm(studioId);
+    await cache.get(studioId);
+    expect(cache.stats()).toMatchObject({ builds: 1, studios: 1 });
+  });
+
+  it("is warmed by a signed-in studio's requests and left alone for signed-out ones", async () => {
+    const warmed: string[] = [];
+    const app = express();
+    app.use((req, _res, next) => {
+      if (req.headers['x-studio']) req.auth = { studioId: String(req.headers['x-studio']) } as typeof req.auth;
+      next();
+    });
+    app.use(libraryWarmUp({ warm: (id) => warmed.push(id) }));
+    app.get('/api/notifications', (_req, res) => res.json({ ok: true }));
+    app.get('/library', (_req, res) => res.send('shell'));
+    expect((await request(app).get('/api/notifications').set('x-studio', studioId)).status).toBe(200);
+    await request(app).get('/api/notifications');
+    await request(app).get('/library').set('x-studio', 'not-api');
+    expect(warmed).toEqual([studioId]);
+  });
+});
