@@ -37,7 +37,7 @@ describe("a studio's search library", () => {
     expect(cache.stats()).toMatchObject({ builds: 1, studios: 1 });
   });
 
-  it("is warmed by a signed-in studio's requests and left alone for signed-out ones", async () => {
+  it("is warmed by a signed-in studio's page loads, not by its edits or signed-out requests", async () => {
     const warmed: string[] = [];
     const app = express();
     app.use((req, _res, next) => {
@@ -47,9 +47,11 @@ describe("a studio's search library", () => {
     app.use(libraryWarmUp({ warm: (id) => warmed.push(id) }));
     app.get('/api/notifications', (_req, res) => res.json({ ok: true }));
     app.get('/library', (_req, res) => res.send('shell'));
+    app.post('/api/motifs/bulk', (_req, res) => res.json({ ok: true }));
     expect((await request(app).get('/api/notifications').set('x-studio', studioId)).status).toBe(200);
     await request(app).get('/api/notifications');
     await request(app).get('/library').set('x-studio', 'not-api');
+    await request(app).post('/api/motifs/bulk').set('x-studio', 'an-edit');
     expect(warmed).toEqual([studioId]);
   });
 });
