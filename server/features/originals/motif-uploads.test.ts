@@ -94,4 +94,23 @@ describe('storing motifs while the unpack goes on', () => {
     const uploads = createMotifUploads({ storage, studioId, outDir, concurrency: 1, studioHasPixels: async () => false });
     await expect(uploads.store([{ ...motif(9), pngFile: '../../etc/passwd' }])).rejects.toThrow('unexpected motif file name');
   });
+
+  it('counts an upload settled only once both of its puts have ended, even when one fails', async () => {
+    const landed: string[] = [];
+    // the thumbnail's put fails at once while the PNG's is still on its way
+    const storage = {
+      async put(key: string) {
+        if (key.endsWith('.webp')) throw new Error('storage unreachable');
+        await new Promise((r) => setTimeout(r, 30));
+        landed.push(key);
+      },
+    } as unknown as ObjectStorage;
+    const uploads = createMotifUploads({ storage, studioId, outDir, concurrency: 2, studioHasPixels: async () => false });
+    const m = motif(7);
+    await expect(uploads.store([m])).rejects.toThrow('storage unreachable');
+    const keys = await uploads.settledKeys();
+    // what a clean-up removes next is already all there is
+    expect(landed).toEqual([motifPngKey(studioId, m.contentHash)]);
+    expect(keys).toContain(motifPngKey(studioId, m.contentHash));
+  });
 });

@@ -46,10 +46,14 @@ export function createMotifUploads({ storage, studioId, outDir, concurrency, stu
     if (firstError) throw firstError;
     written.add(m.contentHash);
     const [png, thumb] = await Promise.all([readFile(fileIn(outDir, m.pngFile)), readFile(fileIn(outDir, m.thumbFile))]);
-    await Promise.all([
+    // both puts end before this upload counts as settled: were one to fail while the other is in
+    // flight, a clean-up after the failure could run before the other lands and leave it behind
+    const ends = await Promise.allSettled([
       storage.put(motifPngKey(studioId, m.contentHash), png, 'image/png'),
       storage.put(motifThumbKey(studioId, m.contentHash), thumb, 'image/webp'),
     ]);
+    const failed = ends.find((e) => e.status === 'rejected');
+    if (failed) throw failed.reason;
     completed++;
     return png.byteLength;
   }
