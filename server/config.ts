@@ -25,6 +25,9 @@ const configSchema = z.object({
   STORAGE_DIR: z.string().default('./storage'),
   RUN_WORKER_IN_PROCESS: boolean.default(true),
   IMPORT_CONCURRENCY: z.coerce.number().int().min(1).max(16).default(1),
+  // Threads that share a print file's drawing with the export job's own (0: draw on it alone);
+  // unset, one per core beyond the first, at most 3.
+  PRINT_DRAW_THREADS: z.coerce.number().int().min(0).max(16).optional(),
   // 1 GiB: the largest layered file a studio is likely to keep (issue's default).
   UPLOAD_LIMIT_BYTES: z.coerce.number().int().min(1024).default(1024 * 1024 * 1024),
   // 40 MiB: above a full-size phone photo (HEIC/JPEG of 48 MP is about 10–25 MB).

@@ -6,6 +6,7 @@ import { createProductsService } from '../features/products/products.service';
 import { createTemplatesRepository } from '../features/templates/templates.repository';
 import { createTemplatesService } from '../features/templates/templates.service';
 import { HttpError } from '../lib/http-error';
+import { setDrawThreads, warmDrawThreads } from '../lib/image/draw-threads';
 import type { Runtime } from '../runtime';
 import { queueNames, type ExportJobData } from './queue';
 
@@ -14,6 +15,9 @@ export async function startExportWorkers(runtime: Runtime): Promise<() => Promis
   const repo = createExportsRepository(runtime.db.db);
   const products = createProductsService(createProductsRepository(runtime.db.db), createTemplatesService(createTemplatesRepository(runtime.db.db), runtime.storage));
   const runExport = createExportRunner({ repo, products, storage: runtime.storage });
+  if (runtime.config.PRINT_DRAW_THREADS !== undefined) setDrawThreads(runtime.config.PRINT_DRAW_THREADS);
+  // loaded now so the first print file is drawn on all of them; tests start them on first use
+  if (runtime.config.NODE_ENV !== 'test') void warmDrawThreads();
   const id = await runtime.queue.boss.work<ExportJobData>(
     queueNames.exportProduct,
     { includeMetadata: true, pollingIntervalSeconds: 0.5, batchSize: 1 },

@@ -1,9 +1,12 @@
 import sharp from 'sharp';
 import { compose, scale, type Affine, type Rect } from '../../../shared/geometry';
 import type { MotifDrawOp } from '../../../shared/scene';
-import { drawTransformed, sampleRows, shrinkFactor, transformedBox, type SourcePixels } from './affine-sample';
-import { compositeOnto, type CompositeOptions } from './composite-rgba';
+import { drawTransformed, shrinkFactor, type SourcePixels } from './affine-sample';
+import type { CompositeOptions } from './composite-rgba';
+import { drawPreparedMotif, type PreparedMotif } from './draw-bands';
 import type { RgbaImage } from './rgba-image';
+
+export { drawPreparedMotif, type PreparedMotif } from './draw-bands';
 
 // Below this the bilinear sampler would skip source pixels (aliasing); the motif is first
 // reduced with a Lanczos filter, as a downscaled bitmap drawn through compose(scale(k), matrix).
@@ -21,32 +24,11 @@ function reducedSize(source: SourcePixels, matrix: Affine): { width: number; hei
   return { width: Math.max(1, Math.round(source.width * k)), height: Math.max(1, Math.round(source.height * k)) };
 }
 
-/** A motif ready to sample: its pixels (the source, or its Lanczos reduction) and their matrix. */
-export type PreparedMotif = { pixels: SourcePixels; matrix: Affine };
-
 /**
  * The sharp half of drawing a motif (the Lanczos pre-reduce, on libvips' threads). The print
  * renderer starts it for the ops ahead, so it runs while JS composites the op before.
  */
 export const prepareMotif = (source: SourcePixels, op: Placed): Promise<PreparedMotif> => samplingSource(source, op);
-
-/**
- * Draws one prepared motif straight onto the canvas: each template row of its box is sampled
- * (bilinear on premultiplied colour, affine-sample.ts) and composited at once, so no layer of the
- * motif's size is ever held.
- */
-export function drawPreparedMotif(canvas: RgbaImage, { pixels, matrix }: PreparedMotif, clip: Rect, composite: CompositeOptions): void {
-  const box = transformedBox(matrix, pixels.width, pixels.height, clip);
-  if (!box) return;
-  const row: RgbaImage = { data: new Uint8Array(0), width: 0, height: 1, left: 0, top: 0 };
-  sampleRows(pixels, matrix, box, (y, data, from, to) => {
-    row.data = data.subarray(from * 4, to * 4);
-    row.width = to - from;
-    row.left = box.left + from;
-    row.top = y;
-    compositeOnto(canvas, row, composite);
-  });
-}
 
 /** Prepares and draws one motif (large reductions go through sharp's Lanczos filter first). */
 export async function drawMotifOnto(canvas: RgbaImage, source: SourcePixels, op: Placed, clip: Rect, composite: CompositeOptions): Promise<void> {

@@ -3,8 +3,9 @@ import { applyRecolour, type Recolour } from '../../../shared/colour';
 import type { Rect } from '../../../shared/geometry';
 import type { MotifDrawOp, RenderPlan, TextDrawOp } from '../../../shared/scene';
 import type { SourcePixels } from './affine-sample';
-import { compositeOnto, type CompositeOptions } from './composite-rgba';
-import { drawPreparedMotif, prepareMotif, type PreparedMotif } from './motif-layer';
+import { intersect, type PreparedMotif } from './draw-bands';
+import { printCanvas, startDrawing } from './draw-threads';
+import { prepareMotif } from './motif-layer';
 import type { RgbaImage } from './rgba-image';
 
 export { motifLayer } from './motif-layer';
@@ -25,12 +26,9 @@ export type PrintRenderNote = { placementId: string; code: 'render.text_skipped'
 
 export type PrintRender = { image: RgbaImage; notes: PrintRenderNote[] };
 
-// Rows drawn at a time: few enough that a band of canvas stays in cache while every op is drawn
-// into it, enough that the per-band costs (boxes, a sampler set-up per op) stay small.
-const BAND_ROWS = 64;
-
-// The share of onProgress given to fetching and preparing sources; drawing has the rest.
-const LOAD_SHARE = 0.5;
+// The share of onProgress reached once every op is drawn on this thread; the draw threads' last
+// bands have the rest.
+const DRAWN_SHARE = 0.95;
 
 // Sources fetched, decoded and pre-reduced ahead of the op being drawn, so storage, decoding and
 // sharp's resizing (on libvips' threads) overlap the JS drawing of the op before.
@@ -50,7 +48,7 @@ const quiet = <T>(p: Promise<T>) => {
  */
 export async function renderPrintFile(plan: RenderPlan, options: PrintRenderOptions): Promise<PrintRender> {
   const { width, height } = plan.size;
-  const canvas: RgbaImage = { data: new Uint8Array(width * height * 4), width, height, left: 0, top: 0 };
+  const canvas = printCanvas(width, height);
   const whole: Rect = { x: 0, y: 0, width, height };
   const notes: PrintRenderNote[] = [];
   const sources = new Map<string, Promise<SourcePixels>>();
@@ -78,8 +76,10 @@ export async function renderPrintFile(plan: RenderPlan, options: PrintRenderOpti
     if (op.kind === 'text' && options.drawText) texts.set(i, quiet(options.drawText(op, clipOf(op.clip, whole))));
   });
 
-  // Every op's pixels first (fetches and sharp's work a few ops ahead of the one awaited) ...
-  const layers: Layer[] = [];
+  // Each op is drawn as soon as its pixels are ready (fetches and sharp's work run a few ops
+  // ahead), onto this thread's bands of the canvas and, on a machine with cores to spare, the
+  // draw threads' bands too (draw-threads.ts): every pixel still sees the ops in plan order.
+  const drawing = startDrawing(canvas);
   for (let i = 0; i < plan.ops.length; i++) {
     for (let k = i; k < Math.min(plan.ops.length, i + LOAD_AHEAD + 1); k++) {
       const ahead = plan.ops[k];
@@ -88,43 +88,19 @@ export async function renderPrintFile(plan: RenderPlan, options: PrintRenderOpti
     const op = plan.ops[i];
     const composite = { blendMode: op.blendMode, opacity: op.opacity };
     if (op.kind === 'motif') {
-      layers.push({ kind: 'motif', motif: await preparedMotif(i, op), clip: clipOf(op.clip, whole), composite });
+      drawing.add({ kind: 'motif', motif: await preparedMotif(i, op), clip: clipOf(op.clip, whole), composite });
       prepared.delete(i);
     } else if (options.drawText) {
       const image = await texts.get(i)!;
-      if (image) layers.push({ kind: 'image', image, composite });
+      if (image) drawing.add({ kind: 'image', image, composite });
     } else {
       notes.push({ placementId: op.placementId, code: 'render.text_skipped', message: 'Text is not drawn into print files yet; convert it to a motif' });
     }
-    await options.onProgress?.(((i + 1) / plan.ops.length) * LOAD_SHARE);
+    await options.onProgress?.(((i + 1) / plan.ops.length) * DRAWN_SHARE);
   }
-  // ... then drawn band by band, all ops in plan order within each band: every pixel still sees the
-  // ops in order, so the pixels are those of drawing op by op, while the canvas rows being written
-  // (a band is 650 kB on the 11 oz mug wrap) stay in the processor's cache across all ops.
-  for (let top = 0; top < height; top += BAND_ROWS) {
-    const bottom = Math.min(height, top + BAND_ROWS);
-    for (const layer of layers) drawBand(canvas, layer, top, bottom);
-    await options.onProgress?.(LOAD_SHARE + ((bottom / height) * (1 - LOAD_SHARE)));
-  }
+  await drawing.finish();
+  await options.onProgress?.(1);
   return { image: canvas, notes };
-}
-
-type Layer =
-  | { kind: 'motif'; motif: PreparedMotif; clip: Rect; composite: CompositeOptions }
-  | { kind: 'image'; image: RgbaImage; composite: CompositeOptions };
-
-function drawBand(canvas: RgbaImage, layer: Layer, top: number, bottom: number): void {
-  if (layer.kind === 'motif') {
-    const clip = intersect(layer.clip, { x: 0, y: top, width: canvas.width, height: bottom - top });
-    if (clip.width > 0 && clip.height > 0) drawPreparedMotif(canvas, layer.motif, clip, layer.composite);
-    return;
-  }
-  const { image } = layer;
-  const from = Math.max(0, top - image.top);
-  const to = Math.min(image.height, bottom - image.top);
-  if (to <= from) return;
-  const rows = { ...image, data: image.data.subarray(from * image.width * 4, to * image.width * 4), height: to - from, top: image.top + from };
-  compositeOnto(canvas, rows, layer.composite);
 }
 
 const clipOf = (clip: Rect | null, whole: Rect) => (clip ? intersect(clip, whole) : whole);
@@ -133,12 +109,6 @@ function recoloured(px: SourcePixels, recolour: Recolour): SourcePixels {
   if (recolour.kind === 'none') return px;
   const data = applyRecolour(px.data, recolour);
   return { data: new Uint8Array(data.buffer, data.byteOffset, data.byteLength), width: px.width, height: px.height };
-}
-
-function intersect(a: Rect, b: Rect): Rect {
-  const x = Math.max(a.x, b.x);
-  const y = Math.max(a.y, b.y);
-  return { x, y, width: Math.max(0, Math.min(a.x + a.width, b.x + b.width) - x), height: Math.max(0, Math.min(a.y + a.height, b.y + b.height) - y) };
 }
 
 /** Decodes a stored motif PNG to straight 8-bit RGBA. */

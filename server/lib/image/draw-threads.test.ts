@@ -1,0 +1,60 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { compose, radians, rotate, scale, translate } from '../../../shared/geometry';
+import type { BlendMode, MotifDrawOp, RenderPlan } from '../../../shared/scene';
+import { drawBands, type DrawLayer } from './draw-bands';
+import { printCanvas, setDrawThreads, startDrawing, warmDrawThreads } from './draw-threads';
+import { prepareMotif } from './motif-layer';
+import { renderPrintFile } from './print-render';
+
+// A plan big enough (over a million canvas pixels) to be shared with the draw threads: turned,
+// scaled motifs in four blend modes crossing many band edges.
+function bigPlan(): { plan: RenderPlan; motif: { data: Uint8Array; width: number; height: number } } {
+  const motif = { data: new Uint8Array(300 * 300 * 4), width: 300, height: 300 };
+  for (let i = 0; i < motif.data.length; i += 4) motif.data.set([(i * 7) % 256, (i * 3) % 256, 120, i % 9 === 0 ? 80 : 255], i);
+  const modes: BlendMode[] = ['normal', 'multiply', 'screen', 'overlay', 'normal', 'normal'];
+  const ops: MotifDrawOp[] = modes.map((blendMode, i) => ({
+    kind: 'motif', placementId: `p${i}`, role: 'placement', width: 300, height: 300, motifId: `m${i}`, version: 1, recolour: { kind: 'none' },
+    matrix: compose(translate(-150, -150), scale(0.6 + 0.5 * i), rotate(radians(0.3 * i + 0.2)), translate(250 + 260 * i, 400 + 40 * (i % 3))),
+    opacity: i === 4 ? 0.6 : 1, blendMode, clip: { x: 10, y: 5, width: 1580, height: 790 },
+  }));
+  return { plan: { size: { width: 1600, height: 800 }, notes: [], ops }, motif };
+}
+
+describe('print drawing shared with draw threads', () => {
+  beforeAll(async () => {
+    setDrawThreads(1);
+    await warmDrawThreads();
+  }, 30_000);
+  afterAll(() => setDrawThreads(0));
+
+  it('gives byte for byte the pixels of drawing every band on one thread', async () => {
+    const { plan, motif } = bigPlan();
+    const { image } = await renderPrintFile(plan, { loadMotif: async () => motif });
+    expect(image.data.buffer).toBeInstanceOf(SharedArrayBuffer);
+    const expected = { data: new Uint8Array(1600 * 800 * 4), width: 1600, height: 800, left: 0, top: 0 };
+    const layers: DrawLayer[] = [];
+    for (const op of plan.ops as MotifDrawOp[]) layers.push({ kind: 'motif', motif: await prepareMotif(motif, op), clip: op.clip!, composite: { blendMode: op.blendMode, opacity: op.opacity } });
+    drawBands(expected, layers);
+    expect(Buffer.compare(Buffer.from(image.data), Buffer.from(expected.data))).toBe(0);
+    // the draw thread's bands (odd ones, rows 64-127, ...) were really drawn
+    expect(image.data.subarray(100 * 1600 * 4, 101 * 1600 * 4).some((v) => v > 0)).toBe(true);
+  });
+
+  it('redraws here the bands of a draw thread that dies mid-render, losing no pixels', async () => {
+    const { plan, motif } = bigPlan();
+    const layers: DrawLayer[] = [];
+    for (const op of plan.ops as MotifDrawOp[]) layers.push({ kind: 'motif', motif: await prepareMotif(motif, op), clip: op.clip!, composite: { blendMode: op.blendMode, opacity: op.opacity } });
+    const expected = { data: new Uint8Array(1600 * 800 * 4), width: 1600, height: 800, left: 0, top: 0 };
+    drawBands(expected, layers);
+
+    const canvas = printCanvas(1600, 800);
+    const drawing = startDrawing(canvas);
+    layers.slice(0, 3).forEach((l) => drawing.add(l));
+    setDrawThreads(0); // the thread is terminated with layers still to draw
+    layers.slice(3).forEach((l) => drawing.add(l));
+    await drawing.finish();
+    expect(Buffer.compare(Buffer.from(canvas.data), Buffer.from(expected.data))).toBe(0);
+    setDrawThreads(1);
+    await warmDrawThreads();
+  }, 30_000);
+});

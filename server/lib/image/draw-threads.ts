@@ -1,0 +1,183 @@
+import { createRequire } from 'node:module';
+import { availableParallelism } from 'node:os';
+import { pathToFileURL } from 'node:url';
+import { Worker } from 'node:worker_threads';
+import { BAND_ROWS, bandCount, drawBands, type DrawLayer } from './draw-bands';
+import type { DrawReply, DrawRequest } from './draw-thread-entry';
+import type { RgbaImage } from './rgba-image';
+
+// Print files are drawn band by band (draw-bands.ts); on a machine with more than one core the
+// bands are shared between this thread and a few long-lived draw threads, as libvips shares an
+// image's tiles between its own threads. The canvas and the sources sit in shared memory, each
+// thread draws whole bands of its own, so the bytes are those of drawing on one thread.
+
+// Below this many canvas pixels a render is quick enough that copying sources to shared memory
+// and waking threads would cost more than it saves (previews, small cards, tests' tiny plans).
+const THREADED_FROM_PIXELS = 1_000_000;
+
+type DrawThread = { worker: Worker; ready: boolean; pending: Map<number, { resolve: () => void; reject: (e: Error) => void }> };
+
+let wanted = Math.max(0, Math.min(3, availableParallelism() - 1));
+let threads: DrawThread[] = [];
+let nextId = 1;
+
+/** How many draw threads to keep besides the calling thread (0 draws everything on it); from PRINT_DRAW_THREADS. */
+export function setDrawThreads(count: number): void {
+  wanted = Math.max(0, Math.floor(count));
+  for (const t of threads.splice(wanted)) void t.worker.terminate();
+}
+
+/** Starts the draw threads (a few hundred ms of module loading) so the first print file does not wait; resolves once they can draw. */
+export function warmDrawThreads(): Promise<void> {
+  while (threads.length < wanted) threads.push(startThread());
+  return Promise.all(threads.map((t) => (t.ready ? undefined : new Promise<void>((resolve) => {
+    const done = () => resolve();
+    t.worker.once('message', done);
+    t.worker.once('exit', done);
+  })))).then(() => undefined);
+}
+
+/** A zeroed canvas, in shared memory when draw threads may share its bands. */
+export function printCanvas(width: number, height: number): RgbaImage {
+  const bytes = width * height * 4;
+  const threaded = wanted > 0 && width * height >= THREADED_FROM_PIXELS;
+  const data = new Uint8Array(threaded ? new SharedArrayBuffer(bytes) : new ArrayBuffer(bytes));
+  return { data, width, height, left: 0, top: 0 };
+}
+
+/** Layers handed over one at a time, in plan order, as their pixels are ready; finish() resolves once all are drawn. */
+export type CanvasDrawing = { add(layer: DrawLayer): void; finish(): Promise<void> };
+
+/**
+ * Starts drawing onto the canvas, sharing its bands with the draw threads that are ready
+ * (starting them for next time if they are not). Each layer is drawn on this thread's bands as it
+ * is added, and posted to the draw threads for theirs, so drawing overlaps the fetching and
+ * resizing of the layers after it. A thread that fails or dies has its bands cleared and drawn
+ * here at the end, so a fault costs time, never pixels.
+ */
+export function startDrawing(canvas: RgbaImage): CanvasDrawing {
+  const shared = canvas.data.buffer instanceof SharedArrayBuffer;
+  if (shared) void warmDrawThreads();
+  const helpers = shared ? threads.filter((t) => t.ready) : [];
+  const parts = helpers.length + 1;
+  if (parts === 1) return { add: (layer) => drawBands(canvas, [layer], 0, 1), finish: async () => undefined };
+  const id = nextId++;
+  const layers: DrawLayer[] = [];
+  const memory = sharedMemory();
+  const replies = helpers.map((thread, i) => ask(thread, id, { kind: 'begin', id, canvas, part: i + 1, parts }));
+  for (const reply of replies) reply.catch(() => undefined);
+  return {
+    add(layer) {
+      layers.push(layer);
+      const copy = memory.share(layer);
+      for (const thread of helpers) thread.worker.postMessage({ kind: 'layer', id, layer: copy } satisfies DrawRequest);
+      drawBands(canvas, [layer], 0, parts);
+    },
+    async finish() {
+      for (const thread of helpers) thread.worker.postMessage({ kind: 'end', id } satisfies DrawRequest);
+      const results = await Promise.allSettled(replies);
+      memory.release();
+      results.forEach((r, i) => {
+        if (r.status === 'fulfilled') return;
+        const part = i + 1;
+        for (let band = part; band < bandCount(canvas.height); band += parts) {
+          canvas.data.fill(0, band * BAND_ROWS * canvas.width * 4, Math.min(canvas.height, (band + 1) * BAND_ROWS) * canvas.width * 4);
+        }
+        drawBands(canvas, layers, part, parts);
+      });
+    },
+  };
+}
+
+/** Draws every layer onto the canvas in plan order (startDrawing with all layers at once). */
+export async function drawLayers(canvas: RgbaImage, layers: DrawLayer[]): Promise<void> {
+  const drawing = startDrawing(canvas);
+  for (const layer of layers) drawing.add(layer);
+  await drawing.finish();
+}
+
+function ask(thread: DrawThread, id: number, request: DrawRequest): Promise<void> {
+  return new Promise<void>((resolve, reject) => {
+    thread.pending.set(id, { resolve, reject });
+    thread.worker.ref();
+    thread.worker.postMessage(request);
+  }).finally(() => {
+    if (thread.pending.size === 0) thread.worker.unref();
+  });
+}
+
+function startThread(): DrawThread {
+  // The thread loads the TypeScript entry through tsx's loader, as the rest of the server runs.
+  const req = createRequire(import.meta.url);
+  const loader = pathToFileURL(req.resolve('tsx/esm/api')).href.replace(/\.cjs$/, '.mjs');
+  const entry = new URL('./draw-thread-entry.ts', import.meta.url).href;
+  const worker = new Worker(`import(${JSON.stringify(loader)}).then(({ register }) => { register(); return import(${JSON.stringify(entry)}); })`, { eval: true });
+  worker.unref();
+  const thread: DrawThread = { worker, ready: false, pending: new Map() };
+  worker.on('message', (message: DrawReply | { ready: true }) => {
+    if ('ready' in message) {
+      thread.ready = true;
+      return;
+    }
+    const waiting = thread.pending.get(message.id);
+    thread.pending.delete(message.id);
+    if (message.ok) waiting?.resolve();
+    else waiting?.reject(new Error(message.message));
+  });
+  const fail = (error: Error) => {
+    threads = threads.filter((t) => t !== thread);
+    thread.ready = false;
+    for (const waiting of thread.pending.values()) waiting.reject(error);
+    thread.pending.clear();
+  };
+  worker.on('error', fail);
+  worker.on('exit', (code) => fail(new Error(`draw thread exited with code ${code}`)));
+  return thread;
+}
+
+// Sources are copied into one shared arena kept between renders: on this kind of host the first
+// write to fresh memory costs far more than the copy itself (measured: 40 MB first touched in
+// 120-170 ms, rewritten in 2.5 ms), so reusing the pages keeps the copy cheap. A render that
+// outgrows the arena, or runs while another holds it, gets fresh memory for the rest; the arena
+// then grows, up to ARENA_KEEP_BYTES, for the next one.
+const ARENA_KEEP_BYTES = 256 * 1024 * 1024;
+let arena: SharedArrayBuffer | null = null;
+let arenaBusy = false;
+
+type SourceData = Uint8Array | Uint8ClampedArray;
+
+function sharedMemory(): { share(layer: DrawLayer): DrawLayer; release(): void } {
+  const own = !arenaBusy;
+  if (own) arenaBusy = true;
+  let at = 0;
+  let needed = 0;
+  // a source used by several layers (the same motif placed twice) is copied once
+  const copies = new Map<SourceData, Uint8Array>();
+  const shared = (data: SourceData): Uint8Array => {
+    if (data.buffer instanceof SharedArrayBuffer) return new Uint8Array(data.buffer, data.byteOffset, data.byteLength);
+    let copy = copies.get(data);
+    if (copy) return copy;
+    const bytes = Math.ceil(data.byteLength / 16) * 16;
+    needed += bytes;
+    if (own && arena && at + bytes <= arena.byteLength) {
+      copy = new Uint8Array(arena, at, data.byteLength);
+      at += bytes;
+    } else {
+      copy = new Uint8Array(new SharedArrayBuffer(data.byteLength));
+    }
+    copy.set(data);
+    copies.set(data, copy);
+    return copy;
+  };
+  return {
+    share: (layer) =>
+      layer.kind === 'motif'
+        ? { ...layer, motif: { ...layer.motif, pixels: { ...layer.motif.pixels, data: shared(layer.motif.pixels.data) } } }
+        : { ...layer, image: { ...layer.image, data: shared(layer.image.data) } },
+    release() {
+      if (!own) return;
+      if (needed > (arena?.byteLength ?? 0) && needed <= ARENA_KEEP_BYTES) arena = new SharedArrayBuffer(needed);
+      arenaBusy = false;
+    },
+  };
+}
