@@ -8,6 +8,7 @@ import type { ExportRow, ExportsRepository } from './exports.repository';
 import { productPreflight } from './product-preflight';
 import { previewOnBlank, previewViewsOf } from './product-previews';
 import { missingMotifs, productSources, renderProduct, versionKey, type SourceDeps } from './product-sources';
+import { releasePrintCanvas, type PrintRender } from '../../lib/image/print-render';
 import { manifestVariants, previewBlanks, variantsCsv } from './variant-print-files';
 
 export type ExportRunnerDeps = SourceDeps & { repo: ExportsRepository; storage: Pick<ObjectStorage, 'getBuffer' | 'put'> };
@@ -39,58 +40,67 @@ export function createExportRunner(deps: ExportRunnerDeps) {
     if (missing.length) throw new ExportFailure('export.missing_motif', `${missing.length} placement(s) use a motif version that is no longer in the library; replace them, then export again.`);
     const bundle = row.kind === 'bundle';
     const render = await renderProduct(sources, { onProgress: (d) => progress(0.05 + d * (bundle ? 0.35 : 0.8)) });
-    const encoded = await encodePrintFile(render.image, sources.template.output);
-    const maxBytes = sources.template.output.maxFileSizeMb * 1024 * 1024;
-    if (encoded.buffer.length > maxBytes) throw new ExportFailure('export.too_large', `The print file is ${(encoded.buffer.length / 1048576).toFixed(1)} MB; this printer takes at most ${sources.template.output.maxFileSizeMb} MB.`);
-    const printName = `print-file.${encoded.extension}`;
-    const files: ExportFile[] = [];
-    const store = async (name: string, data: Buffer | Uint8Array, contentType: string) => {
-      const key = exportFileKey(row, name);
-      await deps.storage.put(key, Buffer.from(data), contentType);
-      files.push({ name, key, contentType, bytes: data.length });
-    };
-    await store(printName, encoded.buffer, encoded.contentType);
-
-    if (bundle) {
-      const entries: BundleEntry[] = [{ name: printName, data: encoded.buffer }];
-      await progress(0.45);
-      // Previews per product variant (its blank and handle colours), or per template blank without variants.
-      const variants = await deps.repo.productVariants(row.studioId, row.productId);
-      for (const target of previewBlanks(sources.template, variants)) {
-        for (const view of previewViewsOf(sources.template)) {
-          entries.push({ name: `previews/${target.folder}/${view}.png`, data: await previewOnBlank(render.image, sources.template, view, target.blank, target.templateVariantId) });
-        }
-      }
-      const variantRows = manifestVariants(sources.template, variants, printName);
-      if (variantRows.length) entries.push({ name: 'variants.csv', data: variantsCsv(variantRows) });
-      await progress(0.65);
-      const proofPng = encoded.contentType === 'image/png' ? encoded.buffer : (await encodePrintFile(render.image, { ...sources.template.output, format: 'png', transparency: 'keep' })).buffer;
-      entries.push({ name: `proof-sheet-${row.paper}.pdf`, data: await buildProofSheet({ png: proofPng, template: sources.template, productName: sources.product.name, paper: row.paper }) });
-      await progress(0.75);
-      const preflight = await productPreflight(sources, null);
-      const used = new Set(sources.product.layout.placements.flatMap((p) => (p.type === 'text' ? [] : [versionKey(p.motifId, p.version)])));
-      entries.push({ name: 'cautions.txt', data: cautionsText(sources.template) });
-      const manifest: Manifest = {
-        product: { id: sources.product.id, name: sources.product.name, revision: sources.product.revision },
-        template: sources.template,
-        // Variants differ only in the blank, never in the layout: one print file serves them all.
-        printFiles: [{
-          name: printName, width: render.image.width, height: render.image.height, dpi: sources.template.output.dpi,
-          variants: variantRows.map((v) => v.sku ?? v.id),
-          sameDesignForAllVariants: true,
-        }],
-        variants: variantRows,
-        motifs: manifestMotifs(sources.versions.values(), used),
-        preflight: preflight.report,
-        renderNotes: render.notes,
-        softProof: { profile: preflight.softProof.profileName ?? '', shareOverDeltaE5: preflight.softProof.shareOverDeltaE5 },
-        files: [...entries.map((e) => e.name), 'manifest.json'],
-        createdAt: new Date().toISOString(),
-      };
-      entries.push({ name: 'manifest.json', data: JSON.stringify(manifest, null, 2) });
-      await progress(0.9);
-      await store('bundle.zip', await zipBundle(entries), 'application/zip');
+    try {
+      await writeExport(render);
+    } finally {
+      // the print file, previews and proof are written: the next export may reuse the canvas
+      releasePrintCanvas(render.image);
     }
-    await deps.repo.update(row.id, { status: 'done', progress: 1, files });
+
+    async function writeExport(render: PrintRender): Promise<void> {
+      const encoded = await encodePrintFile(render.image, sources.template.output);
+      const maxBytes = sources.template.output.maxFileSizeMb * 1024 * 1024;
+      if (encoded.buffer.length > maxBytes) throw new ExportFailure('export.too_large', `The print file is ${(encoded.buffer.length / 1048576).toFixed(1)} MB; this printer takes at most ${sources.template.output.maxFileSizeMb} MB.`);
+      const printName = `print-file.${encoded.extension}`;
+      const files: ExportFile[] = [];
+      const store = async (name: string, data: Buffer | Uint8Array, contentType: string) => {
+        const key = exportFileKey(row, name);
+        await deps.storage.put(key, Buffer.from(data), contentType);
+        files.push({ name, key, contentType, bytes: data.length });
+      };
+      await store(printName, encoded.buffer, encoded.contentType);
+
+      if (bundle) {
+        const entries: BundleEntry[] = [{ name: printName, data: encoded.buffer }];
+        await progress(0.45);
+        // Previews per product variant (its blank and handle colours), or per template blank without variants.
+        const variants = await deps.repo.productVariants(row.studioId, row.productId);
+        for (const target of previewBlanks(sources.template, variants)) {
+          for (const view of previewViewsOf(sources.template)) {
+            entries.push({ name: `previews/${target.folder}/${view}.png`, data: await previewOnBlank(render.image, sources.template, view, target.blank, target.templateVariantId) });
+          }
+        }
+        const variantRows = manifestVariants(sources.template, variants, printName);
+        if (variantRows.length) entries.push({ name: 'variants.csv', data: variantsCsv(variantRows) });
+        await progress(0.65);
+        const proofPng = encoded.contentType === 'image/png' ? encoded.buffer : (await encodePrintFile(render.image, { ...sources.template.output, format: 'png', transparency: 'keep' })).buffer;
+        entries.push({ name: `proof-sheet-${row.paper}.pdf`, data: await buildProofSheet({ png: proofPng, template: sources.template, productName: sources.product.name, paper: row.paper }) });
+        await progress(0.75);
+        const preflight = await productPreflight(sources, null);
+        const used = new Set(sources.product.layout.placements.flatMap((p) => (p.type === 'text' ? [] : [versionKey(p.motifId, p.version)])));
+        entries.push({ name: 'cautions.txt', data: cautionsText(sources.template) });
+        const manifest: Manifest = {
+          product: { id: sources.product.id, name: sources.product.name, revision: sources.product.revision },
+          template: sources.template,
+          // Variants differ only in the blank, never in the layout: one print file serves them all.
+          printFiles: [{
+            name: printName, width: render.image.width, height: render.image.height, dpi: sources.template.output.dpi,
+            variants: variantRows.map((v) => v.sku ?? v.id),
+            sameDesignForAllVariants: true,
+          }],
+          variants: variantRows,
+          motifs: manifestMotifs(sources.versions.values(), used),
+          preflight: preflight.report,
+          renderNotes: render.notes,
+          softProof: { profile: preflight.softProof.profileName ?? '', shareOverDeltaE5: preflight.softProof.shareOverDeltaE5 },
+          files: [...entries.map((e) => e.name), 'manifest.json'],
+          createdAt: new Date().toISOString(),
+        };
+        entries.push({ name: 'manifest.json', data: JSON.stringify(manifest, null, 2) });
+        await progress(0.9);
+        await store('bundle.zip', await zipBundle(entries), 'application/zip');
+      }
+      await deps.repo.update(row.id, { status: 'done', progress: 1, files });
+    }
   };
 }

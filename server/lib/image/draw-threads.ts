@@ -37,12 +37,41 @@ export function warmDrawThreads(): Promise<void> {
   })))).then(() => undefined);
 }
 
+// Shared canvases handed back by releasePrintCanvas, reused by the next render of the same size:
+// their pages are already mapped (see ARENA_KEEP_BYTES below), zeroing them is cheap.
+const SPARE_CANVAS_BYTES = 128 * 1024 * 1024;
+let spareCanvases: SharedArrayBuffer[] = [];
+const handedOut = new WeakSet<SharedArrayBuffer>();
+
 /** A zeroed canvas, in shared memory when draw threads may share its bands. */
 export function printCanvas(width: number, height: number): RgbaImage {
   const bytes = width * height * 4;
   const threaded = wanted > 0 && width * height >= THREADED_FROM_PIXELS;
-  const data = new Uint8Array(threaded ? new SharedArrayBuffer(bytes) : new ArrayBuffer(bytes));
-  return { data, width, height, left: 0, top: 0 };
+  if (!threaded) return { data: new Uint8Array(bytes), width, height, left: 0, top: 0 };
+  const at = spareCanvases.findIndex((b) => b.byteLength === bytes);
+  let buffer: SharedArrayBuffer;
+  if (at >= 0) {
+    buffer = spareCanvases.splice(at, 1)[0];
+    new Uint8Array(buffer).fill(0);
+  } else {
+    buffer = new SharedArrayBuffer(bytes);
+  }
+  handedOut.add(buffer);
+  return { data: new Uint8Array(buffer), width, height, left: 0, top: 0 };
+}
+
+/**
+ * Hands a print canvas back for the next render once nothing reads its pixels any more (the
+ * export job calls it when the print file, previews and proof are written). Canvases that were
+ * not made by printCanvas, or were handed back already, are ignored.
+ */
+export function releasePrintCanvas(image: RgbaImage): void {
+  const buffer = image.data.buffer;
+  if (!(buffer instanceof SharedArrayBuffer) || !handedOut.has(buffer)) return;
+  handedOut.delete(buffer);
+  spareCanvases = [buffer, ...spareCanvases];
+  let kept = 0;
+  spareCanvases = spareCanvases.filter((b) => (kept += b.byteLength) <= SPARE_CANVAS_BYTES);
 }
 
 /** Layers handed over one at a time, in plan order, as their pixels are ready; finish() resolves once all are drawn. */

@@ -9,6 +9,7 @@ import { prepareMotif } from './motif-layer';
 import type { RgbaImage } from './rgba-image';
 
 export { motifLayer } from './motif-layer';
+export { releasePrintCanvas } from './draw-threads';
 
 /** The full-resolution PNG of one motif version, decoded to straight RGBA. */
 export type LoadMotifPixels = (motifId: string, version: number) => Promise<SourcePixels>;
