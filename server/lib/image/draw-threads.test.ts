@@ -1,4 +1,7 @@
+import { spawnSync } from 'node:child_process';
+import { fileURLToPath } from 'node:url';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { tsxCli } from '../../../scripts/services/repo-paths';
 import { compose, radians, rotate, scale, translate } from '../../../shared/geometry';
 import type { BlendMode, MotifDrawOp, RenderPlan } from '../../../shared/scene';
 import { drawBands, type DrawLayer } from './draw-bands';
@@ -56,5 +59,14 @@ describe('print drawing shared with draw threads', () => {
     expect(Buffer.compare(Buffer.from(canvas.data), Buffer.from(expected.data))).toBe(0);
     setDrawThreads(1);
     await warmDrawThreads();
+  }, 30_000);
+
+  it('never keeps a process alive once its render is done', () => {
+    // a thread left referenced made the seed hang after its last line, and with it the test run
+    const script = fileURLToPath(new URL('./draw-threads-exit.fixture.ts', import.meta.url));
+    const run = spawnSync(process.execPath, [tsxCli, script], { encoding: 'utf8', timeout: 20_000 });
+    expect(run.error).toBeUndefined();
+    expect(run.stdout).toContain('drawn 200');
+    expect(run.status).toBe(0);
   }, 30_000);
 });

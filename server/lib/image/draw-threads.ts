@@ -15,7 +15,13 @@ import type { RgbaImage } from './rgba-image';
 // and waking threads would cost more than it saves (previews, small cards, tests' tiny plans).
 const THREADED_FROM_PIXELS = 1_000_000;
 
-type DrawThread = { worker: Worker; ready: boolean; pending: Map<number, { resolve: () => void; reject: (e: Error) => void }> };
+type DrawThread = {
+  worker: Worker;
+  ready: boolean;
+  /** Settles once the thread can draw, or has died trying. */
+  started: Promise<void>;
+  pending: Map<number, { resolve: () => void; reject: (e: Error) => void }>;
+};
 
 let wanted = Math.max(0, Math.min(3, availableParallelism() - 1));
 let threads: DrawThread[] = [];
@@ -30,11 +36,7 @@ export function setDrawThreads(count: number): void {
 /** Starts the draw threads (a few hundred ms of module loading) so the first print file does not wait; resolves once they can draw. */
 export function warmDrawThreads(): Promise<void> {
   while (threads.length < wanted) threads.push(startThread());
-  return Promise.all(threads.map((t) => (t.ready ? undefined : new Promise<void>((resolve) => {
-    const done = () => resolve();
-    t.worker.once('message', done);
-    t.worker.once('exit', done);
-  })))).then(() => undefined);
+  return Promise.all(threads.map((t) => t.started)).then(() => undefined);
 }
 
 // Shared canvases handed back by releasePrintCanvas, reused by the next render of the same size:
@@ -141,11 +143,13 @@ function startThread(): DrawThread {
   const loader = pathToFileURL(req.resolve('tsx/esm/api')).href.replace(/\.cjs$/, '.mjs');
   const entry = new URL('./draw-thread-entry.ts', import.meta.url).href;
   const worker = new Worker(`import(${JSON.stringify(loader)}).then(({ register }) => { register(); return import(${JSON.stringify(entry)}); })`, { eval: true });
-  worker.unref();
-  const thread: DrawThread = { worker, ready: false, pending: new Map() };
+  let started = () => {};
+  const thread: DrawThread = { worker, ready: false, started: new Promise<void>((resolve) => (started = resolve)), pending: new Map() };
   worker.on('message', (message: DrawReply | { ready: true }) => {
     if ('ready' in message) {
       thread.ready = true;
+      started();
+      if (thread.pending.size === 0) worker.unref();
       return;
     }
     const waiting = thread.pending.get(message.id);
@@ -156,11 +160,16 @@ function startThread(): DrawThread {
   const fail = (error: Error) => {
     threads = threads.filter((t) => t !== thread);
     thread.ready = false;
+    started();
     for (const waiting of thread.pending.values()) waiting.reject(error);
     thread.pending.clear();
   };
   worker.on('error', fail);
   worker.on('exit', (code) => fail(new Error(`draw thread exited with code ${code}`)));
+  // The thread holds the process only while it starts (a few hundred ms) or draws: once ready it
+  // is unref'd (in the listener above, so after every listener is added, since adding a 'message'
+  // listener refs the worker's port again), and an idle draw thread never keeps a process (the
+  // seed, a script, a test run) from exiting.
   return thread;
 }
 
