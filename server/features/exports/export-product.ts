@@ -2,7 +2,7 @@ import { encodePrintFile } from '../../lib/image/print-file-encode';
 import { buildProofSheet } from '../../lib/pdf/proof-sheet';
 import type { ObjectStorage } from '../../lib/storage';
 import type { ExportFile } from '../../db/schema/index';
-import { cautionsText } from './cautions';
+import { cautionsText } from '../../../shared/exports/cautions';
 import { manifestMotifs, zipBundle, type BundleEntry, type Manifest } from './export-bundle';
 import type { ExportRow, ExportsRepository } from './exports.repository';
 import { productPreflight } from './product-preflight';

@@ -11,6 +11,7 @@ import { ProductReviewSection } from '../../reviews/components/product-review-se
 import { ProductSamplesSection } from '../../samples/components/product-samples-section';
 import { productQueryOptions } from '../api/get-product';
 import { ProductDetailsPanel } from '../components/product-details-panel';
+import { ProductExports } from '../components/product-exports';
 import { ProductMotifs } from '../components/product-motifs';
 import { ProductPreview } from '../components/product-preview';
 import { ProductVariants } from '../components/product-variants';
@@ -46,6 +47,7 @@ export function ProductPage() {
             <p className="mb-3 text-sm text-ink-soft">Template: {p.template.name} · revision {p.revision} · {p.placementCount} placements</p>
             <ProductDetailsPanel key={p.id} product={p} canEdit={can(me.role, 'products.compose')} />
           </Card>
+          <Card title="Print files"><ProductExports product={p} canExport={can(me.role, 'exports.create')} /></Card>
         </div>
       </div>
       <ProductSamplesSection product={p} />

@@ -1,4 +1,4 @@
-import type { Template } from '../../../shared/templates';
+import type { Template } from '../templates';
 
 /**
  * The usual cautions where a product touches food or heat. General reminders only: the

@@ -1,0 +1,94 @@
+import { useState } from 'react';
+import type { ExportStatusView } from '@shared/contracts/exports';
+import type { ProductDetail } from '@shared/contracts/products';
+import { cautionsFor } from '@shared/exports/cautions';
+import { Button, buttonClasses } from '../../../components/ui/button';
+import { ErrorState } from '../../../components/ui/error-state';
+import { ProgressBar } from '../../../components/ui/progress-bar';
+import { RadioGroup } from '../../../components/ui/radio-group';
+import { StatusMessage } from '../../../components/ui/status-message';
+import { formatBytes } from '../../originals/file-check';
+import { exportDownloadUrl, useCreateProductExport, useExport } from '../api/product-exports';
+
+type Kind = 'print-file' | 'bundle';
+type Paper = 'a4' | 'letter';
+
+const kindOptions = [
+  { value: 'print-file', label: 'Print file only', hint: 'The file the printer asks for, at the template’s exact size and DPI.' },
+  { value: 'bundle', label: 'Full pack (zip)', hint: 'Print files for each variant, previews, a proof sheet to print at actual size, a manifest and the cautions.' },
+] as const;
+const paperOptions = [
+  { value: 'a4', label: 'A4' },
+  { value: 'letter', label: 'US Letter' },
+] as const;
+
+const fileLabels: Record<string, string> = { 'bundle.zip': 'Full pack (zip)', 'print-file.png': 'Print file (PNG)', 'print-file.jpg': 'Print file (JPEG)' };
+
+// Makes the printer's files from the saved layout: a job on the server with its own progress,
+// the usual cautions for food and heat shown before anything is downloaded.
+export function ProductExports({ product, canExport }: { product: ProductDetail; canExport: boolean }) {
+  const [kind, setKind] = useState<Kind>('print-file');
+  const [paper, setPaper] = useState<Paper>('a4');
+  const [exportId, setExportId] = useState<string | null>(null);
+  const create = useCreateProductExport();
+  const job = useExport(exportId);
+  const cautions = cautionsFor(product.template);
+  const running = create.isPending || (exportId !== null && job.data?.status !== 'done' && job.data?.status !== 'failed' && !job.isError);
+
+  const start = () => {
+    setExportId(null);
+    create.mutate({ productId: product.id, request: { kind, paper } }, { onSuccess: ({ id }) => setExportId(id) });
+  };
+
+  return (
+    <div className="flex flex-col gap-4">
+      <section aria-labelledby="export-cautions" className="rounded-md border border-ochre/60 bg-ochre/10 p-3 text-sm">
+        <h3 id="export-cautions" className="mb-1 font-semibold text-ink">Before you sell it</h3>
+        <ul className="list-disc space-y-1 pl-5 text-ink-soft">
+          {cautions.map((line) => <li key={line}>{line}</li>)}
+        </ul>
+      </section>
+      {canExport ? (
+        <>
+          <div className="grid gap-4 sm:grid-cols-[minmax(0,2fr)_minmax(0,1fr)]">
+            <RadioGroup legend="What to make" name="export-kind" value={kind} options={kindOptions} onChange={setKind} disabled={running} />
+            {kind === 'bundle' && <RadioGroup legend="Proof sheet paper" name="export-paper" value={paper} options={paperOptions} onChange={setPaper} disabled={running} />}
+          </div>
+          <div>
+            <Button onClick={start} disabled={running} aria-disabled={running || undefined}>
+              {running ? 'Making…' : kind === 'bundle' ? 'Make the full pack' : 'Make the print file'}
+            </Button>
+          </div>
+        </>
+      ) : (
+        <p className="text-sm text-ink-soft">Reviewers see the product and its cautions; an editor or the owner makes the print files.</p>
+      )}
+      {create.isError && <ErrorState title="The export could not be started" error={create.error} onRetry={start} />}
+      {exportId !== null && job.isError && <ErrorState title="The export’s progress could not be read" error={job.error} onRetry={() => void job.refetch()} />}
+      {exportId !== null && job.data && <ExportOutcome job={job.data} />}
+    </div>
+  );
+}
+
+function ExportOutcome({ job }: { job: ExportStatusView }) {
+  if (job.status === 'failed') {
+    return <StatusMessage tone="problem" title="The export failed">{job.error?.message ?? 'The server could not render this product. Nothing was lost: open the layout, check the preflight, and try again.'}</StatusMessage>;
+  }
+  if (job.status !== 'done') {
+    return <ProgressBar label={job.status === 'queued' ? 'Waiting for a free worker…' : 'Rendering at print size…'} percent={job.status === 'queued' ? null : job.progress * 100} />;
+  }
+  return (
+    <StatusMessage tone="ok" title="Ready to download">
+      <ul className="mt-2 flex flex-col gap-2">
+        {job.files.map((file) => (
+          <li key={file.name} className="flex flex-wrap items-center gap-3">
+            <a className={buttonClasses('secondary', 'sm')} href={exportDownloadUrl(job.id, file.name)} download={file.name}>
+              Download {fileLabels[file.name] ?? file.name}
+            </a>
+            <span className="text-ink-soft tabular-nums">{formatBytes(file.bytes)}</span>
+          </li>
+        ))}
+      </ul>
+    </StatusMessage>
+  );
+}
