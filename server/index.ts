@@ -11,7 +11,7 @@ const config = getConfig();
 const runtime = await openRuntime(config);
 // With the worker in this process, an upload starts unpacking while it is being stored.
 const earlyUnpacks = config.RUN_WORKER_IN_PROCESS ? createEarlyUnpacks({ runUnpack, maxRunning: config.IMPORT_CONCURRENCY }) : undefined;
-const app = createApp({ ...runtime, extraRouters: (shared) => featureRouters(runtime, shared, { earlyUnpacks }) });
+const app = createApp({ ...runtime, extraRouters: (shared) => featureRouters(runtime, shared, { earlyUnpacks, warmLibrariesOnStart: true }) });
 const stopWorkers = config.RUN_WORKER_IN_PROCESS ? await startImportWorkers(runtime, { earlyUnpacks }) : async () => {};
 
 const server: Server = app.listen(config.PORT, config.HOST, () => {

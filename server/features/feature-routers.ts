@@ -6,6 +6,7 @@ import { createCollectionsRepository } from './collections/collections.repositor
 import { collectionsRouter } from './collections/collections.router';
 import { createCollectionsService } from './collections/collections.service';
 import { createLibraryCache } from './motifs/library-cache';
+import { warmSignedInStudios } from './motifs/library-start-warm';
 import { libraryWarmUp } from './motifs/library-warm-up';
 import { createMotifsRepository } from './motifs/motifs.repository';
 import { motifsRouter } from './motifs/motifs.router';
@@ -24,11 +25,12 @@ import { createTagsRepository } from './tags/tags.repository';
 import { tagsRouter } from './tags/tags.router';
 
 // Feature routers that need the queue or storage beyond the foundation's. `earlyUnpacks` only
-// when this process also runs the import worker (shared with it).
+// when this process also runs the import worker (shared with it). `warmLibrariesOnStart`: the
+// server builds the search libraries of studios still signed in, in the background.
 export function featureRouters(
   runtime: Pick<Runtime, 'config' | 'db' | 'storage' | 'queue' | 'mailer'>,
   _shared: SharedServices,
-  options: { earlyUnpacks?: EarlyUnpacks } = {},
+  options: { earlyUnpacks?: EarlyUnpacks; warmLibrariesOnStart?: boolean } = {},
 ): Router[] {
   const { db, storage, queue, config } = runtime;
   const originals = createOriginalsService({
@@ -40,6 +42,7 @@ export function featureRouters(
   });
   // One library cache per process: each keeps itself fresh against Postgres (library-changes.ts).
   const libraryCache = createLibraryCache(db.db);
+  if (options.warmLibrariesOnStart) void warmSignedInStudios(db.db, libraryCache);
   const motifsRepo = createMotifsRepository(db.db);
   const motifs = createMotifsService({ db: db.db, repo: motifsRepo, cache: libraryCache, storage });
   const collections = createCollectionsService({ db: db.db, repo: createCollectionsRepository(db.db), cache: libraryCache });

@@ -1,8 +1,11 @@
+import { sql } from 'drizzle-orm';
 import express from 'express';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createLibraryCache } from '../../../server/features/motifs/library-cache';
+import { warmSignedInStudios } from '../../../server/features/motifs/library-start-warm';
 import { libraryWarmUp } from '../../../server/features/motifs/library-warm-up';
+import { sessions } from '../../../server/db/schema/index';
 import { seedMotifs } from '../support/library-seed';
 import { createTestApp, signUpOwner, type TestApp } from '../support/test-app';
 
@@ -53,5 +56,19 @@ describe("a studio's search library", () => {
     await request(app).get('/library').set('x-studio', 'not-api');
     await request(app).post('/api/motifs/bulk').set('x-studio', 'an-edit');
     expect(warmed).toEqual([studioId]);
+  });
+});
+
+describe('search libraries at server start', () => {
+  it('are built for studios whose people are still signed in, and for no others', async () => {
+    const other = await signUpOwner(t.app, 'Saltmarsh Signed Out');
+    // the signed-out studio's sessions have expired (as after a sign-out or a long absence)
+    await t.runtime.db.db.execute(sql`update ${sessions} set expire = now() - interval '1 minute' where sess->>'studioId' = ${other.me.studio.id}`);
+    const cache = createLibraryCache(t.runtime.db.db);
+    // a high limit: other test files' studios may share this database
+    const warmed = await warmSignedInStudios(t.runtime.db.db, cache, 200);
+    expect(warmed).toContain(studioId);
+    expect(warmed).not.toContain(other.me.studio.id);
+    expect(cache.stats()).toMatchObject({ builds: warmed.length, studios: warmed.length });
   });
 });
