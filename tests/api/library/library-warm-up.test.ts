@@ -64,9 +64,9 @@ describe('search libraries at server start', () => {
     const other = await signUpOwner(t.app, 'Saltmarsh Signed Out');
     // the signed-out studio's sessions have expired (as after a sign-out or a long absence)
     await t.runtime.db.db.execute(sql`update ${sessions} set expire = now() - interval '1 minute' where sess->>'studioId' = ${other.me.studio.id}`);
-    const cache = createLibraryCache(t.runtime.db.db);
-    // a high limit: other test files' studios may share this database
-    const warmed = await warmSignedInStudios(t.runtime.db.db, cache, 200);
+    // high limits: other test files' studios with live sessions share this database
+    const cache = createLibraryCache(t.runtime.db.db, { maxStudios: 1000 });
+    const warmed = await warmSignedInStudios(t.runtime.db.db, cache, 1000);
     expect(warmed).toContain(studioId);
     expect(warmed).not.toContain(other.me.studio.id);
     expect(cache.stats()).toMatchObject({ builds: warmed.length, studios: warmed.length });
