@@ -1,8 +1,8 @@
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { productDetailSchema } from '../../shared/contracts/products';
-import { openBrowser, type OpenBrowser } from './support/browser';
-import { demoPassword, signIn } from './support/studio-steps';
+import type { OpenBrowser } from './support/browser';
+import { openSignedIn } from './support/studio-steps';
 import '../setup/provided-context';
 
 // The compositor issue's walk-through: three Puffin Picnic motifs on an 11 oz mug wrap, one
@@ -13,10 +13,7 @@ let browser: OpenBrowser;
 let page: Page;
 
 beforeAll(async () => {
-  browser = await openBrowser({ viewport: { width: 1440, height: 900 } });
-  page = await browser.newPage();
-  page.setDefaultTimeout(15_000);
-  await signIn(page, appUrl, 'ines@saltmarsh.test', demoPassword);
+  ({ browser, page } = await openSignedIn(appUrl, 'ines@saltmarsh.test', { viewport: { width: 1440, height: 900 } }));
 });
 
 afterAll(async () => {

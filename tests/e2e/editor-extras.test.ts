@@ -3,8 +3,8 @@ import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { productDetailSchema } from '../../shared/contracts/products';
 import { mug11oz } from '../../shared/templates';
-import { openBrowser, type OpenBrowser } from './support/browser';
-import { demoPassword, signIn } from './support/studio-steps';
+import type { OpenBrowser } from './support/browser';
+import { openSignedIn } from './support/studio-steps';
 import '../setup/provided-context';
 
 // The editor's printer's guide overlay, text on a curve, and two-finger zoom on a touch screen.
@@ -17,10 +17,7 @@ let guidedProductId: string;
 const csrf = async () => ((await (await page.request.get(`${appUrl}/api/auth/csrf`)).json()) as { csrfToken: string }).csrfToken;
 
 beforeAll(async () => {
-  browser = await openBrowser({ viewport: { width: 1440, height: 900 } });
-  page = await browser.newPage();
-  page.setDefaultTimeout(20_000);
-  await signIn(page, appUrl, 'teodor@saltmarsh.test', demoPassword);
+  ({ browser, page } = await openSignedIn(appUrl, 'teodor@saltmarsh.test', { viewport: { width: 1440, height: 900 }, timeout: 20_000 }));
   // a studio template with the printer's guide: a solid plum sheet, half the file's size, so
   // the canvas must stretch it to the whole file
   const token = await csrf();

@@ -3,8 +3,8 @@ import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { motifListResponseSchema } from '../../shared/contracts/motifs';
 import { productDetailSchema } from '../../shared/contracts/products';
 import { createMotifPlacement } from '../../shared/scene';
-import { openBrowser, type OpenBrowser } from './support/browser';
-import { demoPassword, signIn } from './support/studio-steps';
+import type { OpenBrowser } from './support/browser';
+import { openSignedIn } from './support/studio-steps';
 import '../setup/provided-context';
 
 // Issue 6 in the editor: the print check beside the canvas follows the layout live, a finding
@@ -16,10 +16,7 @@ let page: Page;
 let productId: string;
 
 beforeAll(async () => {
-  browser = await openBrowser({ viewport: { width: 1440, height: 900 } });
-  page = await browser.newPage();
-  page.setDefaultTimeout(20_000);
-  await signIn(page, appUrl, 'ines@saltmarsh.test', demoPassword);
+  ({ browser, page } = await openSignedIn(appUrl, 'ines@saltmarsh.test', { viewport: { width: 1440, height: 900 }, timeout: 20_000 }));
   const api = page.request;
   const csrf = ((await (await api.get(`${appUrl}/api/auth/csrf`)).json()) as { csrfToken: string }).csrfToken;
   const list = motifListResponseSchema.parse(await (await api.get(`${appUrl}/api/motifs?limit=500`)).json());

@@ -2,9 +2,9 @@ import type { APIRequestContext, Page } from 'playwright-core';
 import sharp from 'sharp';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { originalDetailSchema, uploadOriginalResponseSchema, type OriginalDetail } from '../../shared/contracts/originals';
-import { openBrowser, type OpenBrowser } from './support/browser';
+import type { OpenBrowser } from './support/browser';
 import { layeredCard, type ExpectedMotif } from './support/layered-card';
-import { demoPassword, signIn } from './support/studio-steps';
+import { openSignedIn } from './support/studio-steps';
 import '../setup/provided-context';
 
 // The originals issue's promise, as the demo editor sees it: a layered PSD goes in, a progress
@@ -15,10 +15,7 @@ let browser: OpenBrowser;
 let page: Page;
 
 beforeAll(async () => {
-  browser = await openBrowser();
-  page = await browser.newPage();
-  page.setDefaultTimeout(15_000);
-  await signIn(page, appUrl, 'teodor@saltmarsh.test', demoPassword);
+  ({ browser, page } = await openSignedIn(appUrl, 'teodor@saltmarsh.test'));
 });
 
 afterAll(async () => {

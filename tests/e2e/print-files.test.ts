@@ -6,8 +6,8 @@ import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { mug11oz } from '../../shared/templates/built-in-mugs';
 import { templatePixelSize } from '../../shared/templates/template-geometry';
-import { openBrowser, type OpenBrowser } from './support/browser';
-import { demoPassword, signIn } from './support/studio-steps';
+import type { OpenBrowser } from './support/browser';
+import { openSignedIn } from './support/studio-steps';
 import '../setup/provided-context';
 
 // An editor reads the mug's cautions on its page, makes its print file, and downloads a PNG
@@ -18,10 +18,7 @@ let browser: OpenBrowser;
 let page: Page;
 
 beforeAll(async () => {
-  browser = await openBrowser({ viewport: { width: 1440, height: 900 } });
-  page = await browser.newPage();
-  page.setDefaultTimeout(15_000);
-  await signIn(page, appUrl, 'teodor@saltmarsh.test', demoPassword);
+  ({ browser, page } = await openSignedIn(appUrl, 'teodor@saltmarsh.test', { viewport: { width: 1440, height: 900 } }));
 });
 
 afterAll(async () => {

@@ -10,11 +10,11 @@ import { createMotifPlacement, createTextPlacement, type Layout, type MotifPlace
 import { blankColoursOf, pointsToPixels, templatePixelSize } from '../../shared/templates';
 import { loadTestFontStack } from '../../shared/text/test-fonts';
 import { measureText } from '../../shared/text/text-layout';
-import { openBrowser, screenshotDir, type OpenBrowser } from './support/browser';
+import { screenshotDir, type OpenBrowser } from './support/browser';
 import { bundleParityRenderer } from './support/parity-bundle';
 import type { ParityRenderInput } from './support/parity-renderer-entry';
 import { deltaEStats } from './support/delta-e-stats';
-import { demoPassword, signIn } from './support/studio-steps';
+import { openSignedIn } from './support/studio-steps';
 import '../setup/provided-context';
 
 // Issue 6's parity check: the editor's canvas renderer (in Chromium) and the server's print file
@@ -28,10 +28,7 @@ let api: APIRequestContext;
 let csrf = '';
 
 beforeAll(async () => {
-  browser = await openBrowser();
-  page = await browser.newPage();
-  page.setDefaultTimeout(20_000);
-  await signIn(page, appUrl, 'ines@saltmarsh.test', demoPassword);
+  ({ browser, page } = await openSignedIn(appUrl, 'ines@saltmarsh.test', { timeout: 20_000 }));
   api = page.request;
   csrf = ((await (await api.get(`${appUrl}/api/auth/csrf`)).json()) as { csrfToken: string }).csrfToken;
 });

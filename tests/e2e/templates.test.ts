@@ -1,8 +1,8 @@
 import sharp from 'sharp';
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import { openBrowser, type OpenBrowser } from './support/browser';
-import { demoPassword, signIn } from './support/studio-steps';
+import type { OpenBrowser } from './support/browser';
+import { openSignedIn } from './support/studio-steps';
 import '../setup/provided-context';
 
 // An editor enters their printer's own mug figures, watches the diagram follow, saves, and lays
@@ -13,10 +13,7 @@ let browser: OpenBrowser;
 let page: Page;
 
 beforeAll(async () => {
-  browser = await openBrowser({ viewport: { width: 1440, height: 1000 } });
-  page = await browser.newPage();
-  page.setDefaultTimeout(15_000);
-  await signIn(page, appUrl, 'teodor@saltmarsh.test', demoPassword);
+  ({ browser, page } = await openSignedIn(appUrl, 'teodor@saltmarsh.test', { viewport: { width: 1440, height: 1000 } }));
 });
 
 afterAll(async () => {

@@ -1,4 +1,5 @@
 import type { Page } from 'playwright-core';
+import { openBrowser, type OpenBrowser, type OpenBrowserOptions } from './browser';
 import { waitForMail } from '../../../scripts/services/fake-mail';
 
 export const demoPassword = 'saltmarsh-demo';
@@ -16,6 +17,24 @@ export async function signIn(page: Page, appUrl: string, email: string, password
   await fillSignIn(page, email, password);
   await page.waitForURL((url) => url.pathname === '/');
   await page.getByRole('heading', { level: 1, name: /^Welcome, / }).waitFor();
+}
+
+/** A fresh browser with one page, signed in as a demo person: the usual start of a browser test file. */
+export async function openSignedIn(
+  appUrl: string,
+  email: string,
+  { viewport, timeout = 15_000 }: OpenBrowserOptions & { timeout?: number } = {},
+): Promise<{ browser: OpenBrowser; page: Page }> {
+  const browser = await openBrowser({ viewport });
+  try {
+    const page = await browser.newPage();
+    page.setDefaultTimeout(timeout);
+    await signIn(page, appUrl, email, demoPassword);
+    return { browser, page };
+  } catch (error) {
+    await browser.close();
+    throw error;
+  }
 }
 
 export async function fillSignIn(page: Page, email: string, password: string): Promise<void> {
