@@ -12,7 +12,7 @@ import { openRuntime } from '../../server/runtime';
 import type { UnpackBenchRow } from './import-bench';
 import { generateBenchPsds } from './psd-fixtures';
 
-export type ImportBenchRow = { file: string; workerInProcess: boolean; wallMs: number; uploadMs: number; timings: ImportPhaseTimings; parentPeakRssMb: number; vsImageMagick: number | null; vsFloor: number };
+export type ImportBenchRow = { file: string; workerInProcess: boolean; wallMs: number; uploadMs: number; timings: ImportPhaseTimings; parentPeakRssMb: number; parentCpuMs: number; vsImageMagick: number | null; vsFloor: number };
 
 // The whole import a user waits for — upload to storage, queue row, unpack in the child, S3 puts
 // of masters and thumbnails, the DB commit — against the peers timed in the same run. Measured
@@ -47,12 +47,14 @@ export async function benchImportEndToEnd(peers: UnpackBenchRow[], log: (line: s
       let parentPeak = process.memoryUsage().rss;
       const sampler = setInterval(() => (parentPeak = Math.max(parentPeak, process.memoryUsage().rss)), 50);
       const started = performance.now();
+      const cpuBefore = process.cpuUsage();
       const upload = path.join(path.dirname(psd.file), `${psd.name}.upload`);
       await copyFile(psd.file, upload);
       const { id } = await service.upload({ studioId: studioFor.get(workerInProcess)!, userId: user.id, filePath: upload, fileName: path.basename(psd.file), byteSize: (await stat(upload)).size, cut: 'layers' });
       const uploadMs = performance.now() - started;
       const outcome = await importOriginal(id);
       const wallMs = Math.round(performance.now() - started);
+      const cpu = process.cpuUsage(cpuBefore);
       clearInterval(sampler);
       if (outcome !== 'imported' || !timings) throw new Error(`bench import of ${psd.name} ended ${outcome}`);
       const row: ImportBenchRow = {
@@ -62,6 +64,7 @@ export async function benchImportEndToEnd(peers: UnpackBenchRow[], log: (line: s
         uploadMs: Math.round(uploadMs),
         timings,
         parentPeakRssMb: Math.round(parentPeak / 1048576),
+        parentCpuMs: Math.round((cpu.user + cpu.system) / 1000),
         vsImageMagick: peer?.imageMagickMs ? wallMs / peer.imageMagickMs : null,
         vsFloor: peer ? wallMs / peer.floorMs : NaN,
       };
@@ -73,6 +76,7 @@ export async function benchImportEndToEnd(peers: UnpackBenchRow[], log: (line: s
       log(`  phases: upload to storage ${ms(row.uploadMs)}${t.unpackedEarly ? ' (unpacking meanwhile)' : ''}, claim ${ms(t.claimMs)}, download ${ms(t.downloadMs)}, unpack ${t.unpackedEarly ? 'after the claim ' : ''}${ms(t.unpackMs)} (parse ${ms(t.unpack?.parseMs ?? 0)}, cut ${ms(t.unpack?.cutMs ?? 0)}, encode ${ms(t.unpack?.encodeMs ?? 0)}),`
         + ` storage after the unpack ${ms(t.storageMs)} (${t.storedDuringUnpack} of ${t.stored} motifs stored during the unpack), db ${ms(t.dbMs)}`);
       log(`  peak memory: unpack child ${Math.round((t.childPeakRssBytes ?? 0) / 1048576)} MB, worker process ${row.parentPeakRssMb} MB`);
+      log(`  CPU: unpack child ${Math.round(t.childCpuMs ?? 0)} ms, this process ${row.parentCpuMs} ms (with the local fake storage, which runs in it)`);
     }
   } finally {
     await earlyUnpacks.close();

@@ -31,7 +31,7 @@ export type RunUnpack = (
 // and unpackMs is only what was left of that unpack when the job claimed it).
 export type ImportPhaseTimings = {
   claimMs: number; downloadMs: number; unpackMs: number; storageMs: number; dbMs: number; unpackedEarly: boolean;
-  storedDuringUnpack: number; stored: number; unpack?: UnpackResult['timings']; childPeakRssBytes?: number;
+  storedDuringUnpack: number; stored: number; unpack?: UnpackResult['timings']; childPeakRssBytes?: number; childCpuMs?: number;
 };
 
 // Motifs stored at once, each as PNG and thumbnail (two requests). Each put waits mostly on the
@@ -208,7 +208,7 @@ export function createOriginalImporter({ db, repo, storage, runUnpack, earlyUnpa
       const committed = await commitImport(db, { original, result, decisions, firstNewIndex, pngBytes, report });
       onTimings?.({
         claimMs, downloadMs, unpackMs, storageMs, dbMs: lap(), unpackedEarly: early !== null, storedDuringUnpack, stored: toStore.length,
-        unpack: result.timings, childPeakRssBytes: result.resources?.peakRssBytes,
+        unpack: result.timings, childPeakRssBytes: result.resources?.peakRssBytes, childCpuMs: result.resources?.cpuMs,
       });
       if (!committed) await discardUnreferenced(original, uploads).catch(() => {});
       return committed ? 'imported' : 'skipped';

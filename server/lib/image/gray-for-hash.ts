@@ -13,31 +13,44 @@ export function grayOnWhite(image: RgbaPixels, width: number, height: number): U
   return gray;
 }
 
-// area average to an exact size (used for tiny hash inputs; stretches like fit 'fill')
+// area average to an exact size (used for tiny hash inputs; stretches like fit 'fill'). Each
+// source pixel falls in cell (floor(x·width / W), floor(y·height / H)); the column of each x is
+// worked out once, transparent pixels add nothing but their count (known from the cell's size),
+// so the sums, and the bytes, are those of adding every pixel in turn.
 function downscaleExact(image: RgbaPixels, width: number, height: number): RgbaPixels {
-  const acc = new Float64Array(width * height * 5);
+  const acc = new Float64Array(width * height * 4);
+  const cellOfColumn = new Int32Array(image.width);
+  const columnsIn = new Float64Array(width);
+  for (let x = 0; x < image.width; x++) {
+    const ox = Math.min(width - 1, Math.floor((x * width) / image.width));
+    cellOfColumn[x] = ox;
+    columnsIn[ox]++;
+  }
+  const rowsIn = new Float64Array(height);
+  const src = image.data;
   for (let y = 0; y < image.height; y++) {
     const oy = Math.min(height - 1, Math.floor((y * height) / image.height));
-    for (let x = 0; x < image.width; x++) {
-      const ox = Math.min(width - 1, Math.floor((x * width) / image.width));
-      const p = (y * image.width + x) * 4;
-      const o = (oy * width + ox) * 5;
-      const a = image.data[p + 3];
-      acc[o] += image.data[p] * a;
-      acc[o + 1] += image.data[p + 1] * a;
-      acc[o + 2] += image.data[p + 2] * a;
+    rowsIn[oy]++;
+    const rowCell = oy * width;
+    let p = y * image.width * 4;
+    for (let x = 0; x < image.width; x++, p += 4) {
+      const a = src[p + 3];
+      if (a === 0) continue;
+      const o = (rowCell + cellOfColumn[x]) * 4;
+      acc[o] += src[p] * a;
+      acc[o + 1] += src[p + 1] * a;
+      acc[o + 2] += src[p + 2] * a;
       acc[o + 3] += a;
-      acc[o + 4] += 1;
     }
   }
   const data = new Uint8Array(width * height * 4);
   for (let i = 0; i < width * height; i++) {
-    const a = acc[i * 5 + 3];
-    const n = acc[i * 5 + 4];
+    const a = acc[i * 4 + 3];
+    const n = rowsIn[Math.floor(i / width)] * columnsIn[i % width];
     if (a > 0) {
-      data[i * 4] = clampByte(acc[i * 5] / a);
-      data[i * 4 + 1] = clampByte(acc[i * 5 + 1] / a);
-      data[i * 4 + 2] = clampByte(acc[i * 5 + 2] / a);
+      data[i * 4] = clampByte(acc[i * 4] / a);
+      data[i * 4 + 1] = clampByte(acc[i * 4 + 1] / a);
+      data[i * 4 + 2] = clampByte(acc[i * 4 + 2] / a);
     }
     data[i * 4 + 3] = n > 0 ? clampByte(a / n) : 0;
   }
