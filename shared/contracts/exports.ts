@@ -58,5 +58,7 @@ export const productPreflightSchema = z.object({
   motifs: z.array(motifFactsSchema),
   palette: z.array(paletteGroupSchema),
   softProof: softProofSchema.extend({ deltaE: z.number(), renderWidth: z.number(), renderHeight: z.number() }),
+  /** The studio's colour-group limit the palette was checked against. */
+  paletteLimit: z.number().int().min(1).max(64),
 });
 export type ProductPreflightView = z.infer<typeof productPreflightSchema>;

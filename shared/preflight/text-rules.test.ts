@@ -36,4 +36,13 @@ describe('text rules', () => {
     expect(severities(findingsOf('text-contrast', [whiteText], { template: mug11oz, variantId: 'heat-changing-cold' }))).toEqual(['ok:product']);
     expect(severities(findingsOf('text-contrast', [whiteText], { texts: [{ placementId: 'title', backdropColour: '#000000' }] }))).toEqual(['ok:product']);
   });
+
+  it('with no variant chosen, also checks the variants’ blanks: dark text on the cold heat-changing mug', () => {
+    const darkText = text({ colour: '#222222' });
+    expect(findingsOf('text-contrast', [darkText], { template: mug11oz })).toMatchObject([
+      { severity: 'warning', message: expect.stringContaining('against the “Heat-changing, cold” blank') },
+    ]);
+    // the chosen variant alone counts: the white body reads well
+    expect(severities(findingsOf('text-contrast', [darkText], { template: mug11oz, variantId: 'heat-changing-warm' }))).toEqual(['ok:product']);
+  });
 });

@@ -20,28 +20,46 @@ export function textSizeRule(ctx: PreflightContext): Finding[] {
   return findings.length || !texts(ctx).length ? findings : [passed('text-size', `All text is at least ${min} pt`)];
 }
 
+/** The blank colours text is checked against: the chosen variant's, or with none chosen the plain blank's and every variant's body that differs from it. */
+function backdropsOf(ctx: PreflightContext): { body: string; variant: string | null }[] {
+  const { template, variantId } = ctx.input;
+  if (variantId) return [{ body: blankColoursOf(template, variantId).body, variant: null }];
+  const all = [{ body: template.blank.body, variant: null as string | null }];
+  for (const v of template.variants) {
+    const body = blankColoursOf(template, v.id).body;
+    if (!all.some((b) => b.body.toLowerCase() === body.toLowerCase())) all.push({ body, variant: v.name });
+  }
+  return all;
+}
+
 /**
  * WCAG 2.x contrast ratio of the text colour against what lies behind it: the renderer's measured
- * backdrop when given, else the blank's body colour. 4.5:1 for normal text, 3:1 for large text
- * (SC 1.4.3).
+ * backdrop when given, else the blank's body colour: the chosen variant's, or with none chosen the
+ * least favourable of the blank's and its variants' (dark text on the black blank counts too).
+ * 4.5:1 for normal text, 3:1 for large text (SC 1.4.3).
  */
 export function textContrastRule(ctx: PreflightContext): Finding[] {
-  const body = blankColoursOf(ctx.input.template, ctx.input.variantId).body;
+  const backdrops = backdropsOf(ctx);
   const findings: Finding[] = [];
   for (const p of texts(ctx)) {
     if (p.type !== 'text' || p.content.trim() === '') continue;
     const given = ctx.textFacts(p.id)?.backdropColour;
     const measured = given !== undefined && parseHexColour(given).ok ? given : undefined;
-    const ratio = contrastRatio(hexToRgb(p.colour), hexToRgb(measured ?? body));
+    const colour = hexToRgb(p.colour);
+    const worst = measured
+      ? { ratio: contrastRatio(colour, hexToRgb(measured)), variant: null }
+      : backdrops
+          .map((b) => ({ ratio: contrastRatio(colour, hexToRgb(b.body)), variant: b.variant }))
+          .reduce((a, b) => (b.ratio < a.ratio ? b : a));
     const needed = p.sizePt >= LARGE_TEXT_PT ? WCAG_THRESHOLDS.aaLargeText : WCAG_THRESHOLDS.aaNormalText;
-    if (ratio >= needed) continue;
-    const against = measured ? 'the artwork behind it' : 'the blank’s colour';
+    if (worst.ratio >= needed) continue;
+    const against = measured ? 'the artwork behind it' : worst.variant ? `the “${worst.variant}” blank` : 'the blank’s colour';
     findings.push(
       finding(
         'text-contrast',
         'warning',
-        `${placementLabel(ctx, p)} has a contrast of ${Math.floor(ratio * 100) / 100}:1 against ${against}; text this size needs ${needed}:1 to read easily`,
-        'Use a darker or lighter text colour, or put a shape behind the text',
+        `${placementLabel(ctx, p)} has a contrast of ${Math.floor(worst.ratio * 100) / 100}:1 against ${against}; text this size needs ${needed}:1 to read easily`,
+        worst.variant ? 'Use a text colour that reads on every blank you sell, or leave that blank out for this design' : 'Use a darker or lighter text colour, or put a shape behind the text',
         p.id,
       ),
     );

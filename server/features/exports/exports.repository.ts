@@ -1,7 +1,7 @@
 import { and, asc, eq, inArray } from 'drizzle-orm';
 import type { VariantOptions } from '../../../shared/contracts/variants';
 import type { Database } from '../../db/client';
-import { motifs, motifVersions, productExports, productVariants, type ExportError, type ExportFile, type ExportKind, type ExportStatus } from '../../db/schema/index';
+import { motifs, motifVersions, productExports, productVariants, studios, type ExportError, type ExportFile, type ExportKind, type ExportStatus } from '../../db/schema/index';
 
 export type ExportRow = typeof productExports.$inferSelect;
 
@@ -34,6 +34,11 @@ export function createExportsRepository(db: Database) {
     },
     async update(id: string, patch: { status?: ExportStatus; progress?: number; files?: ExportFile[]; error?: ExportError | null }) {
       await db.update(productExports).set({ ...patch, updatedAt: new Date() }).where(eq(productExports.id, id));
+    },
+    /** The most colour groups the studio allows a product before preflight points it out. */
+    async paletteLimit(studioId: string): Promise<number | undefined> {
+      const [row] = await db.select({ paletteLimit: studios.paletteLimit }).from(studios).where(eq(studios.id, studioId)).limit(1);
+      return row?.paletteLimit;
     },
     async motifVersions(studioId: string, motifIds: string[]): Promise<MotifVersionRecord[]> {
       if (motifIds.length === 0) return [];

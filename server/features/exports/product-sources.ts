@@ -15,9 +15,11 @@ export type ProductSources = {
   /** Keyed `${motifId}@${version}`; only this studio's motifs. */
   versions: Map<string, MotifVersionRecord>;
   loadMotif: LoadMotifPixels;
+  /** The studio's own preflight settings (its colour-group limit). */
+  preflightOptions: { paletteLimit?: number };
 };
 
-export type SourceDeps = { products: Pick<ProductsService, 'detail'>; repo: Pick<ExportsRepository, 'motifVersions'>; storage: Pick<ObjectStorage, 'getBuffer'> };
+export type SourceDeps = { products: Pick<ProductsService, 'detail'>; repo: Pick<ExportsRepository, 'motifVersions' | 'paletteLimit'>; storage: Pick<ObjectStorage, 'getBuffer'> };
 
 export const versionKey = (motifId: string, version: number) => `${motifId}@${version}`;
 
@@ -25,7 +27,8 @@ export const versionKey = (motifId: string, version: number) => `${motifId}@${ve
 export async function productSources(deps: SourceDeps, studioId: string, productId: string): Promise<ProductSources> {
   const product = await deps.products.detail(studioId, productId);
   const ids = [...new Set(product.layout.placements.flatMap((p) => (p.type === 'text' ? [] : [p.motifId])))];
-  const versions = new Map((await deps.repo.motifVersions(studioId, ids)).map((v) => [versionKey(v.motifId, v.version), v]));
+  const [records, paletteLimit] = await Promise.all([deps.repo.motifVersions(studioId, ids), deps.repo.paletteLimit(studioId)]);
+  const versions = new Map(records.map((v) => [versionKey(v.motifId, v.version), v]));
   const decoded = new Map<string, Promise<SourcePixels>>();
   const loadMotif: LoadMotifPixels = (motifId, version) => {
     const key = versionKey(motifId, version);
@@ -38,7 +41,7 @@ export async function productSources(deps: SourceDeps, studioId: string, product
     }
     return p;
   };
-  return { product, template: product.template, scene: createScene(product.layout), versions, loadMotif };
+  return { product, template: product.template, scene: createScene(product.layout), versions, loadMotif, preflightOptions: paletteLimit ? { paletteLimit } : {} };
 }
 
 /** Placements whose motif version is not (or no longer) in the studio's library. */

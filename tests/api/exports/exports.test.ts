@@ -81,6 +81,24 @@ describe('preflight on the server', () => {
     expect(res.body.palette.length).toBeGreaterThanOrEqual(2);
     expect(res.body.motifs.find((m: { id: string }) => m.id === kite.id)).toMatchObject({ width: kite.width, height: kite.height, rightsStatus: 'own_work', hasTransparency: false });
   });
+
+  it('counts colour groups against the limit the studio set, and says which limit it used', async () => {
+    const paletteOf = async () => {
+      const res = await owner.get(`/api/products/${productId}/preflight`).expect(200);
+      return { limit: res.body.paletteLimit, finding: res.body.report.findings.find((f: { rule: string }) => f.rule === 'palette'), groups: res.body.palette.length };
+    };
+    const usual = await paletteOf();
+    expect(usual.limit).toBe(6);
+    expect((await owner.patch('/api/studio', { paletteLimit: 1 })).status).toBe(200);
+    try {
+      const strict = await paletteOf();
+      expect(strict.limit).toBe(1);
+      expect(strict.groups).toBeGreaterThan(1);
+      expect(strict.finding).toMatchObject({ severity: 'warning', message: expect.stringContaining('the studio’s limit is 1') });
+    } finally {
+      await owner.patch('/api/studio', { paletteLimit: 6 });
+    }
+  });
 });
 
 describe('previews', () => {

@@ -9,6 +9,7 @@ const server = (init: Partial<ProductPreflightView> = {}): ProductPreflightView 
   motifs: [],
   palette: [{ hex: '#1d6f6a', share: 1 }],
   softProof: { shareOverDeltaE5: 0, profileName: 'ISO Coated v2 300% (FOGRA39)', deltaE: 5, renderWidth: 1000, renderHeight: 412 },
+  paletteLimit: 6,
   ...init,
 });
 
@@ -33,6 +34,14 @@ describe('the editor’s live preflight', () => {
     // moved across the seam at the strip's left end: the same rules see it at once
     const moved = livePreflight(layoutOf({ ...placed, x: 10 }), mug11oz, facts);
     expect(moved.findings.some((f) => f.placementId === 'p1' && f.severity !== 'ok' && (f.rule === 'outside-print-area' || f.rule === 'seam'))).toBe(true);
+  });
+
+  it('counts colour groups against the studio’s own limit, as the server did', () => {
+    const placed = motif({ id: 'p1', motifId: 'm-puffin', version: 1, naturalWidth: 100, naturalHeight: 50, x: 1275, y: 525 });
+    const palette = ['#1d6f6a', '#f6f1e8', '#c4462b', '#20324f'].map((hex) => ({ hex, share: 0.25 }));
+    const palettes = (limit: number) => livePreflight(layoutOf(placed), mug11oz, server({ motifs: [puffinFacts], palette, paletteLimit: limit })).findings.filter((f) => f.rule === 'palette');
+    expect(palettes(3).map((f) => f.severity)).toEqual(['warning']);
+    expect(palettes(6).map((f) => f.severity)).toEqual(['ok']);
   });
 
   it('keeps a motif the server found missing as a problem', () => {

@@ -41,6 +41,8 @@ export function livePreflight(layout: Layout, template: Template, server: Produc
     motifs: [...known.values(), ...provisional.values()],
     paletteGroups: server?.palette,
     softProof: server ? { shareOverDeltaE5: server.softProof.shareOverDeltaE5, profileName: server.softProof.profileName } : null,
+    // the studio's own limit, as the server checked it
+    options: server ? { paletteLimit: server.paletteLimit } : undefined,
   });
   return { ...report, pendingPlacements };
 }
