@@ -22,8 +22,9 @@ describe('checking a file before it is uploaded as an original', () => {
     expect(problem?.message).toContain('PSD');
   });
 
-  it('refuses large-document PSB files with a way out', () => {
-    expect(checkOriginalFile(file('poster.psb'))?.message).toMatch(/PSB.*save a copy as PSD/i);
+  it('takes large-document PSB files, which the server unpacks like PSD ones', () => {
+    expect(checkOriginalFile(file('poster.psb'))).toBeNull();
+    expect(fileKindOf({ name: 'poster.PSB', type: '' })).toBe('psd');
   });
 
   it('refuses a file over the limit before sending a byte, and an empty one', () => {

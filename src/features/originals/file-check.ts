@@ -8,8 +8,10 @@ export const UPLOAD_LIMIT_BYTES = 1024 ** 3;
 
 export type OriginalFileKind = 'psd' | 'png' | 'jpeg' | 'webp';
 
+// Large-document PSB files unpack like PSD ones, within the same pixel limits.
 const kindsByExtension: Record<string, OriginalFileKind> = {
   psd: 'psd',
+  psb: 'psd',
   png: 'png',
   jpg: 'jpeg',
   jpeg: 'jpeg',
@@ -27,7 +29,7 @@ const kindsByMime: Record<string, OriginalFileKind> = {
 };
 
 // For the file picker; listing MIME types as well helps pickers that ignore extensions.
-export const originalFileAccept = '.psd,.png,.jpg,.jpeg,.webp,image/png,image/jpeg,image/webp,image/vnd.adobe.photoshop';
+export const originalFileAccept = '.psd,.psb,.png,.jpg,.jpeg,.webp,image/png,image/jpeg,image/webp,image/vnd.adobe.photoshop';
 
 export type FileProblem = { code: 'upload.unsupported_type' | 'upload.too_large' | 'upload.empty'; message: string };
 
@@ -56,17 +58,11 @@ export function formatBytes(bytes: number): string {
 
 export function checkOriginalFile(file: FileFacts, limitBytes = UPLOAD_LIMIT_BYTES): FileProblem | null {
   const extension = extensionOf(file.name);
-  if (extension === 'psb') {
-    return {
-      code: 'upload.unsupported_type',
-      message: 'Large-document PSB files are not supported yet. Save a copy as PSD (up to 30,000 px a side) and upload that.',
-    };
-  }
   if (!fileKindOf(file)) {
     const what = extension ? `a .${extension} file` : 'a file without a type';
     return {
       code: 'upload.unsupported_type',
-      message: `“${file.name}” is ${what}. Originals can be layered PSD files or flat PNG, JPEG or WebP images.`,
+      message: `“${file.name}” is ${what}. Originals can be layered PSD (or PSB) files or flat PNG, JPEG or WebP images.`,
     };
   }
   if (file.size === 0) return { code: 'upload.empty', message: `“${file.name}” is empty (0 bytes).` };

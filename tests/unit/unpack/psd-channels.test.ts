@@ -85,7 +85,7 @@ describe('header cases ag-psd alone would refuse or misread', () => {
     writeFileSync(file, writeRawPsd({ width: 2, height: 1, channels: 4, mode: 4, layers: [] }));
     await expect(unpackOriginal({ filePath: file, outDir: dir, cut: 'layers' })).rejects.toMatchObject({
       code: 'psd.unsupported_mode',
-      message: 'CMYK PSD files are not supported; convert the document to RGB colour and upload it again',
+      message: 'CMYK PSD files are not supported (RGB and Grayscale are); convert the document to RGB colour and upload it again',
     });
   });
 });

@@ -70,7 +70,7 @@ describe('PSD header check', () => {
   it('rejects depths the format does not have, and 16- and 32-bit files with a clear message', () => {
     expect(codeOf({ depth: 12 })).toBe('psd.bad_depth');
     const sixteen = checkPsdHeader(header({ depth: 16 }));
-    expect(sixteen).toEqual({ ok: false, error: { code: 'psd.unsupported_depth', message: '16-bit PSD files are not supported yet; save a copy as 8-bit' } });
+    expect(sixteen).toEqual({ ok: false, error: { code: 'psd.unsupported_depth', message: '16-bit PSD files are not supported yet (8 bits per channel are); save a copy as 8-bit' } });
     expect(codeOf({ depth: 32 })).toBe('psd.unsupported_depth');
   });
 

@@ -83,11 +83,11 @@ export function checkPsdHeader(head: Buffer, options: PsdHeaderOptions = {}): Ps
   }
   if (!SUPPORTED_MODES.includes(colourModeCode)) {
     return fail('psd.unsupported_mode',
-      `${modeName} PSD files are not supported; convert the document to RGB colour and upload it again`);
+      `${modeName} PSD files are not supported (RGB and Grayscale are); convert the document to RGB colour and upload it again`);
   }
   if (depth !== SUPPORTED_DEPTH) {
     return fail('psd.unsupported_depth',
-      `${depth}-bit PSD files are not supported yet; save a copy as 8-bit`);
+      `${depth}-bit PSD files are not supported yet (8 bits per channel are); save a copy as 8-bit`);
   }
   const minChannels = colourModeCode === 3 ? 3 : 1;
   if (channels < minChannels) {

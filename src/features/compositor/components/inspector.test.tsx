@@ -1,7 +1,9 @@
 // @vitest-environment happy-dom
 import { act, cleanup, fireEvent, render, screen, within } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { createMotifPlacement, emptyLayout } from '@shared/scene';
+import { createMotifPlacement, createTextPlacement, emptyLayout } from '@shared/scene';
+import { runPreflight } from '@shared/preflight';
+import { createScene } from '@shared/scene';
 import { mug11oz } from '@shared/templates';
 import { Autosaver } from '../autosave';
 import { ProductEditor } from '../editor';
@@ -36,6 +38,24 @@ describe('inspector', () => {
     expect(editor.layout.placements[0].rotationDeg).toBe(30);
     act(() => editor.undo());
     expect(editor.layout.placements[0].rotationDeg).toBe(0);
+  });
+});
+
+describe('text fields', () => {
+  it('marks words as a quote and keeps its source, which the quote check then reads', () => {
+    const words = createTextPlacement({ id: 'words', content: 'Tide waits for no puffin', fontId: 'source-sans-3', sizePt: 24, boxWidth: 600, boxHeight: 100, x: 1275, y: 525 });
+    const editor = new ProductEditor(mug11oz, { ...emptyLayout, placements: [words] });
+    editor.select(['words']);
+    render(<Inspector editor={editor} />);
+    expect(screen.queryByLabelText('Quoted from')).toBeNull();
+    fireEvent.click(screen.getByLabelText(/someone else’s words/));
+    const quoteCheck = () => runPreflight({ scene: createScene(editor.layout), template: mug11oz, motifs: [] }).findings.filter((f) => f.rule === 'quote-source');
+    expect(quoteCheck().map((f) => f.severity)).toEqual(['warning']);
+    const source = screen.getByLabelText('Quoted from');
+    fireEvent.change(source, { target: { value: 'Harbour almanac, 1931' } });
+    fireEvent.blur(source);
+    expect(editor.layout.placements[0]).toMatchObject({ isQuote: true, quoteSource: 'Harbour almanac, 1931' });
+    expect(quoteCheck().map((f) => f.severity)).toEqual(['ok']);
   });
 });
 

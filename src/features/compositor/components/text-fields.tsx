@@ -12,6 +12,8 @@ export function TextFields({ editor, p }: { editor: ProductEditor; p: TextPlacem
   const dpi = editor.template.dpi;
   const [content, setContent] = useState(p.content);
   useEffect(() => setContent(p.content), [p.content]);
+  const [source, setSource] = useState(p.quoteSource);
+  useEffect(() => setSource(p.quoteSource), [p.quoteSource]);
   const edit = (patch: Partial<TextPlacement>) =>
     editor.change((l) => mapPlacements(l, [p.id], (q) => (q.type === 'text' ? remeasured({ ...q, ...patch }, dpi) : q)));
   return (
@@ -35,6 +37,23 @@ export function TextFields({ editor, p }: { editor: ProductEditor; p: TextPlacem
         <Select aria-label="Alignment" value={p.align} options={aligns} className="border-sand text-sm"
           onChange={(e) => edit({ align: e.target.value as TextPlacement['align'] })} />
       </div>
+      <label className="flex items-center gap-2 text-xs text-ink-soft">
+        <input type="checkbox" checked={p.isQuote} onChange={(e) => edit({ isQuote: e.target.checked })} />
+        These are someone else’s words (a quote)
+      </label>
+      {p.isQuote && (
+        <div className="text-xs text-ink-soft">
+          <label className="block">
+            Quoted from
+            <input type="text" value={source} maxLength={300} placeholder="Who said or wrote it, and where"
+              onChange={(e) => setSource(e.target.value)}
+              onBlur={() => source !== p.quoteSource && edit({ quoteSource: source })}
+              onKeyDown={(e) => e.key === 'Enter' && (e.target as HTMLInputElement).blur()}
+              className="mt-0.5 block w-full rounded border border-sand bg-white px-1.5 py-1 text-sm text-ink" />
+          </label>
+          <p className="mt-0.5">Check that you may print it before you sell the product.</p>
+        </div>
+      )}
     </section>
   );
 }

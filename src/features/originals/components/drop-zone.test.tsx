@@ -50,8 +50,8 @@ describe('drop zone for originals', () => {
     const onFile = vi.fn();
     render(<DropZone onFile={onFile} />);
     const input = document.querySelector<HTMLInputElement>('input[type=file]') as HTMLInputElement;
-    fireEvent.change(input, { target: { files: [new File(['x'], 'poster.psb')] } });
-    expect(screen.getByRole('alert').textContent).toMatch(/PSB/);
+    fireEvent.change(input, { target: { files: [new File(['x'], 'poster.indd')] } });
+    expect(screen.getByRole('alert').textContent).toMatch(/\.indd file/);
     expect(onFile).not.toHaveBeenCalled();
   });
 });

@@ -126,7 +126,7 @@ describe('original page', () => {
       status: 'failed',
       report: null,
       motifs: [],
-      error: { code: 'psd.unsupported_depth', message: '16-bit PSD files are not supported yet; save a copy as 8-bit' },
+      error: { code: 'psd.unsupported_depth', message: '16-bit PSD files are not supported yet (8 bits per channel are); save a copy as 8-bit' },
     };
     const queued: OriginalDetail = { ...failed, status: 'queued', phase: 'queued', percent: 0, error: null };
     let retried = false;
