@@ -23,9 +23,15 @@ export const exportStatusSchema = z.object({
   progress: z.number(),
   files: z.array(exportFileSchema),
   error: z.object({ code: z.string(), message: z.string() }).nullable(),
+  // the product's layout revision the files were made from
+  productRevision: z.number().int(),
   createdAt: z.string(),
 });
 export type ExportStatusView = z.infer<typeof exportStatusSchema>;
+
+/** GET /api/products/:id/exports: the product's latest exports, newest first. */
+export const PRODUCT_EXPORTS_LISTED = 8;
+export const productExportsSchema = z.object({ exports: z.array(exportStatusSchema) });
 
 export const downloadQuerySchema = z.object({ file: z.string().min(1).max(200) });
 

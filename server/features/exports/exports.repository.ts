@@ -1,4 +1,4 @@
-import { and, asc, eq, inArray } from 'drizzle-orm';
+import { and, asc, desc, eq, inArray } from 'drizzle-orm';
 import type { VariantOptions } from '../../../shared/contracts/variants';
 import type { Database } from '../../db/client';
 import { motifs, motifVersions, productExports, productVariants, studios, type ExportError, type ExportFile, type ExportKind, type ExportStatus } from '../../db/schema/index';
@@ -27,6 +27,12 @@ export function createExportsRepository(db: Database) {
     async find(studioId: string, id: string) {
       const [row] = await db.select().from(productExports).where(and(eq(productExports.studioId, studioId), eq(productExports.id, id))).limit(1);
       return row ?? null;
+    },
+    async listForProduct(studioId: string, productId: string, limit: number) {
+      return db.select().from(productExports)
+        .where(and(eq(productExports.studioId, studioId), eq(productExports.productId, productId)))
+        .orderBy(desc(productExports.createdAt), desc(productExports.id))
+        .limit(limit);
     },
     async findForJob(id: string) {
       const [row] = await db.select().from(productExports).where(eq(productExports.id, id)).limit(1);

@@ -13,6 +13,9 @@ export function productExportsRouter(service: ExportsService) {
     const auth = studioAuth(req);
     res.status(202).json(await service.request(auth.studioId, auth.user.id, idParam(req, 'id', 'That product'), parseBody(req, createExportRequestSchema)));
   });
+  r.get('/:id/exports', 'studio.read', async (req, res) => {
+    res.set('Cache-Control', 'private, no-cache').json(await service.listForProduct(studioAuth(req).studioId, idParam(req, 'id', 'That product')));
+  });
   r.get('/:id/preflight', 'studio.read', async (req, res) => {
     const { variant } = parseQuery(req, preflightQuerySchema);
     res.json(await service.preflight(studioAuth(req).studioId, idParam(req, 'id', 'That product'), variant ?? null));

@@ -1,5 +1,5 @@
 import type { Readable } from 'node:stream';
-import type { CreateExportRequest, ExportStatusView, PreviewView } from '../../../shared/contracts/exports';
+import { PRODUCT_EXPORTS_LISTED, type CreateExportRequest, type ExportStatusView, type PreviewView } from '../../../shared/contracts/exports';
 import type { JobQueue } from '../../jobs/queue';
 import { notFound } from '../../lib/http-error';
 import type { ObjectStorage } from '../../lib/storage';
@@ -21,6 +21,7 @@ function view(row: ExportRow): ExportStatusView {
     progress: row.progress,
     files: row.files.map((f) => ({ name: f.name, contentType: f.contentType, bytes: f.bytes })),
     error: row.error ?? null,
+    productRevision: row.productRevision,
     createdAt: row.createdAt.toISOString(),
   };
 }
@@ -33,6 +34,11 @@ export function createExportsService(deps: Deps) {
       const row = await repo.insert({ studioId, productId, productRevision: product.revision, kind: input.kind, paper: input.paper, createdBy: userId });
       await queue.enqueueExport(row.id);
       return { id: row.id };
+    },
+    /** The product's latest exports, so files made earlier stay at hand after leaving the page. */
+    async listForProduct(studioId: string, productId: string): Promise<{ exports: ExportStatusView[] }> {
+      await products.detail(studioId, productId); // 404 for another studio's product
+      return { exports: (await repo.listForProduct(studioId, productId, PRODUCT_EXPORTS_LISTED)).map(view) };
     },
     async status(studioId: string, id: string): Promise<ExportStatusView> {
       const row = await repo.find(studioId, id);

@@ -67,6 +67,20 @@ describe('print file export', () => {
     await waitForExport(owner, started.body.id);
     expect((await owner.get(`/api/exports/${started.body.id}/download?file=..%2Fsecret`)).status).toBe(404);
   });
+
+  it('lists the product’s exports newest first, with the layout revision each was made from', async () => {
+    const latest = await owner.post(`/api/products/${productId}/exports`, {});
+    await waitForExport(owner, latest.body.id);
+    const res = await owner.get(`/api/products/${productId}/exports`).expect(200);
+    const listed = res.body.exports as { id: string; createdAt: string; productRevision: number; status: string }[];
+    expect(listed[0]).toMatchObject({ id: latest.body.id, status: 'done' });
+    expect(listed.length).toBeGreaterThanOrEqual(2);
+    expect(listed.map((e) => e.createdAt)).toEqual([...listed.map((e) => e.createdAt)].sort().reverse());
+    const product = await owner.get(`/api/products/${productId}`).expect(200);
+    expect(listed[0].productRevision).toBe(product.body.revision);
+    const stranger = (await signUpOwner(t.app, 'Far Harbour')).client;
+    expect((await stranger.get(`/api/products/${productId}/exports`)).status).toBe(404);
+  });
 });
 
 describe('preflight on the server', () => {

@@ -1,6 +1,6 @@
-import { queryOptions, useMutation, useQuery } from '@tanstack/react-query';
+import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
-import { exportStatusSchema, type CreateExportRequest, type ExportStatusView } from '@shared/contracts/exports';
+import { exportStatusSchema, productExportsSchema, type CreateExportRequest, type ExportStatusView } from '@shared/contracts/exports';
 import { apiRequest } from '../../../lib/api-client';
 
 const createdSchema = z.object({ id: z.string() });
@@ -28,8 +28,23 @@ export function useExport(id: string | null) {
   return useQuery({ ...exportQueryOptions(id ?? ''), enabled: id !== null });
 }
 
+export function getProductExports({ productId, signal }: { productId: string; signal?: AbortSignal }) {
+  return apiRequest(`/products/${encodeURIComponent(productId)}/exports`, { schema: productExportsSchema, signal });
+}
+
+export const productExportsKey = (productId: string) => ['exports', 'product', productId] as const;
+
+// The product's earlier exports, so files made before stay at hand after leaving the page.
+export function useProductExports(productId: string) {
+  return useQuery({ queryKey: productExportsKey(productId), queryFn: ({ signal }) => getProductExports({ productId, signal }) });
+}
+
 export function useCreateProductExport() {
-  return useMutation({ mutationFn: createProductExport });
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: createProductExport,
+    onSettled: (_data, _error, { productId }) => void client.invalidateQueries({ queryKey: productExportsKey(productId) }),
+  });
 }
 
 /** The address a finished export's file downloads from (a plain link: the browser saves it). */

@@ -15,15 +15,17 @@ afterEach(() => {
 });
 
 const template = (kind: string) => builtInTemplates.find((t) => t.kind === kind)!;
-const product = (kind: string) => ({ id: 'prod-1', name: 'Puffin Picnic mug', template: template(kind) }) as unknown as ProductDetail;
+const product = (kind: string) => ({ id: 'prod-1', name: 'Puffin Picnic mug', revision: 4, template: template(kind) }) as unknown as ProductDetail;
+const noneEarlier = { 'GET /api/products/prod-1/exports': { body: { exports: [] } } };
 const status = (over: Partial<ExportStatusView>): ExportStatusView => ({
-  id: 'exp-1', productId: 'prod-1', kind: 'bundle', status: 'running', progress: 0, files: [], error: null, createdAt: '2026-12-03T09:00:00.000Z', ...over,
+  id: 'exp-1', productId: 'prod-1', kind: 'bundle', status: 'running', progress: 0, files: [], error: null, productRevision: 4, createdAt: '2026-12-03T09:00:00.000Z', ...over,
 });
 
 describe('print files on a product page', () => {
   it('shows the food and heat cautions, makes the full pack with its progress, then offers the download', async () => {
     let polls = 0;
     const { calls } = fakeApi({
+      ...noneEarlier,
       'GET /api/auth/csrf': { body: { csrfToken: 'token-1' } },
       'POST /api/products/prod-1/exports': { status: 202, body: { id: 'exp-1' } },
       'GET /api/exports/exp-1': () => {
@@ -54,6 +56,7 @@ describe('print files on a product page', () => {
 
   it('says why a job failed, and why one could not start', async () => {
     fakeApi({
+      ...noneEarlier,
       'GET /api/auth/csrf': { body: { csrfToken: 'token-1' } },
       'POST /api/products/prod-1/exports': { status: 202, body: { id: 'exp-1' } },
       'GET /api/exports/exp-1': { body: status({ status: 'failed', error: { code: 'export.missing_motif', message: 'The motif “Kite” is no longer stored.' } }) },
@@ -64,6 +67,7 @@ describe('print files on a product page', () => {
     cleanup();
 
     fakeApi({
+      ...noneEarlier,
       'GET /api/auth/csrf': { body: { csrfToken: 'token-1' } },
       'POST /api/products/prod-1/exports': apiError(403, 'auth.forbidden', 'Only editors and the owner can export.'),
     });
@@ -73,8 +77,26 @@ describe('print files on a product page', () => {
     expect(screen.getByText(/Only editors and the owner can export/)).toBeTruthy();
   });
 
+  it('lists files made on an earlier visit with their downloads, and says which came from an older layout', async () => {
+    fakeApi({
+      'GET /api/products/prod-1/exports': {
+        body: {
+          exports: [
+            status({ id: 'exp-9', status: 'done', progress: 1, productRevision: 3, files: [{ name: 'bundle.zip', contentType: 'application/zip', bytes: 2048 }] }),
+            status({ id: 'exp-8', kind: 'print-file', status: 'failed', error: { code: 'export.failed', message: 'The storage did not answer.' } }),
+          ],
+        },
+      },
+    });
+    renderPage(<ProductExports product={product('mug-wrap')} canExport />);
+    const link = await screen.findByRole('link', { name: 'Full pack (zip) · 2.0 KB' }, slow);
+    expect(link.getAttribute('href')).toBe('/api/exports/exp-9/download?file=bundle.zip');
+    expect(screen.getByText(/made from an earlier layout \(revision 3\)/)).toBeTruthy();
+    expect(screen.getByText(/failed: The storage did not answer\./)).toBeTruthy();
+  });
+
   it('gives a reviewer the cautions but no button, and a card no food-contact claims', () => {
-    fakeApi({});
+    fakeApi(noneEarlier);
     renderPage(<ProductExports product={product('card')} canExport={false} />);
     expect(screen.queryByRole('button', { name: /Make/ })).toBeNull();
     expect(screen.getByText(/not meant for food or drink/)).toBeTruthy();

@@ -1,4 +1,5 @@
-import { useState } from 'react';
+import { useEffect, useState } from 'react';
+import { useQueryClient } from '@tanstack/react-query';
 import type { ExportStatusView } from '@shared/contracts/exports';
 import type { ProductDetail } from '@shared/contracts/products';
 import { cautionsFor } from '@shared/exports/cautions';
@@ -8,7 +9,7 @@ import { ProgressBar } from '../../../components/ui/progress-bar';
 import { RadioGroup } from '../../../components/ui/radio-group';
 import { StatusMessage } from '../../../components/ui/status-message';
 import { formatBytes } from '../../originals/file-check';
-import { exportDownloadUrl, useCreateProductExport, useExport } from '../api/product-exports';
+import { exportDownloadUrl, productExportsKey, useCreateProductExport, useExport, useProductExports } from '../api/product-exports';
 
 type Kind = 'print-file' | 'bundle';
 type Paper = 'a4' | 'letter';
@@ -33,6 +34,12 @@ export function ProductExports({ product, canExport }: { product: ProductDetail;
   const create = useCreateProductExport();
   const job = useExport(exportId);
   const cautions = cautionsFor(product.template);
+  const client = useQueryClient();
+  const finished = job.data?.status === 'done' || job.data?.status === 'failed';
+  // a job that ends joins the list of earlier ones
+  useEffect(() => {
+    if (finished) void client.invalidateQueries({ queryKey: productExportsKey(product.id) });
+  }, [finished, client, product.id]);
   const running = create.isPending || (exportId !== null && job.data?.status !== 'done' && job.data?.status !== 'failed' && !job.isError);
 
   const start = () => {
@@ -66,7 +73,41 @@ export function ProductExports({ product, canExport }: { product: ProductDetail;
       {create.isError && <ErrorState title="The export could not be started" error={create.error} onRetry={start} />}
       {exportId !== null && job.isError && <ErrorState title="The export’s progress could not be read" error={job.error} onRetry={() => void job.refetch()} />}
       {exportId !== null && job.data && <ExportOutcome job={job.data} />}
+      <EarlierExports product={product} except={exportId} />
     </div>
+  );
+}
+
+const kindNames: Record<ExportStatusView['kind'], string> = { 'print-file': 'Print file', bundle: 'Full pack' };
+const when = (iso: string) => new Date(iso).toLocaleString(undefined, { day: 'numeric', month: 'short', hour: '2-digit', minute: '2-digit' });
+
+// Files made before (on this page or another visit), newest first, with their downloads.
+function EarlierExports({ product, except }: { product: ProductDetail; except: string | null }) {
+  const list = useProductExports(product.id);
+  if (list.isPending) return <p className="text-sm text-ink-soft">Looking for files made earlier…</p>;
+  if (list.isError) return <ErrorState title="Files made earlier could not be listed" error={list.error} onRetry={() => void list.refetch()} />;
+  const earlier = list.data.exports.filter((e) => e.id !== except);
+  if (earlier.length === 0) return <p className="text-sm text-ink-soft">No print files made yet for this product.</p>;
+  return (
+    <section aria-labelledby="earlier-exports">
+      <h3 id="earlier-exports" className="mb-1 text-sm font-semibold text-ink">Made earlier</h3>
+      <ul className="flex flex-col divide-y divide-sand text-sm">
+        {earlier.map((e) => (
+          <li key={e.id} className="flex flex-wrap items-center gap-x-3 gap-y-1 py-1.5">
+            <span className="text-ink">{kindNames[e.kind]}</span>
+            <span className="text-ink-soft tabular-nums">{when(e.createdAt)}</span>
+            {e.productRevision < product.revision && <span className="text-ink-soft">made from an earlier layout (revision {e.productRevision})</span>}
+            {e.status === 'failed' && <span className="text-rust">failed: {e.error?.message ?? 'no reason given'}</span>}
+            {(e.status === 'queued' || e.status === 'running') && <span className="text-ink-soft">still being made…</span>}
+            {e.status === 'done' && e.files.map((file) => (
+              <a key={file.name} className="text-tide-deep underline underline-offset-2" href={exportDownloadUrl(e.id, file.name)} download={file.name}>
+                {fileLabels[file.name] ?? file.name} · {formatBytes(file.bytes)}
+              </a>
+            ))}
+          </li>
+        ))}
+      </ul>
+    </section>
   );
 }
 

@@ -50,6 +50,7 @@ const routes = (extra = {}) => ({
   [`GET /api/products/${id}`]: { body: product },
   [`GET /api/products/${id}/stages`]: { body: history },
   [`GET /api/products/${id}/variants`]: { body: variants },
+  [`GET /api/products/${id}/exports`]: { body: { exports: [] } },
   'GET /api/products': { body: { products: [product] } },
   'GET /api/collections': { body: { collections: [] } },
   ...extra,
