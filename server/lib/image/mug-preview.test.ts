@@ -19,6 +19,19 @@ describe('mug previews', () => {
   const size = templatePixelSize(mug11oz);
   const print = halves(size.width, size.height);
 
+  it('shows the inside colour in the opening above the rim', async () => {
+    const blue = { ...mug11oz.blank, inside: '#2e5e8c', handle: '#2e5e8c' };
+    const coloured = await raw(await renderMugPreview(print, mug11oz, 'front', blue, { bodyWidth: 200 }));
+    const white = await raw(await renderMugPreview(print, mug11oz, 'front', mug11oz.blank, { bodyWidth: 200 }));
+    // a few rows down from the top, at the middle: the far inside wall, shaded
+    const inColour = at(coloured, Math.round(coloured.info.width / 2), 5);
+    const inWhite = at(white, Math.round(white.info.width / 2), 5);
+    expect(inColour[2]).toBeGreaterThan(inColour[0] + 20);
+    expect(Math.abs(inWhite[0] - inWhite[2])).toBeLessThan(8);
+    // beside the opening, above the body's shoulders, nothing is drawn
+    expect(at(coloured, 2, 1)).toEqual([0, 0, 0]);
+  });
+
   it('shows the middle of the wrap on the front and its ends, near the handle, on the back', async () => {
     const front = await raw(await renderMugPreview(print, mug11oz, 'front', mug11oz.blank, { bodyWidth: 200 }));
     const cx = Math.round(front.info.width / 2);

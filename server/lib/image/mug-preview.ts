@@ -20,8 +20,13 @@ const HANDLE_THICKNESS = 0.14; // of the radius
 const HANDLE_HEIGHT = 0.36; // half-height, of the body height
 const RIM_BAND = 0.025; // of the body height
 const HANDLE_LIGHT = 0.8;
+// The opening seen a little from above: its far half as an ellipse over the rim, this tall
+// against the body's half-width, in the inside colour (a look, not a measurement).
+const OPENING_TILT = 0.08;
+const INSIDE_LIGHT = { back: 0.5, front: 0.78 };
 
-type Canvas = { data: Uint8Array; width: number; height: number };
+// oy: rows above the body (the opening); every draw's y is counted from the body's top.
+type Canvas = { data: Uint8Array; width: number; height: number; oy: number };
 
 /**
  * A mug seen from one side (orthographic): each column of the body copies the print file's
@@ -37,7 +42,9 @@ export async function renderMugPreview(print: RgbaImage, template: Template, vie
   const s = map.scale; // output px per template px
   const bodyHeight = Math.round(geometry.wrap.heightPx * s);
   const margin = Math.round(cyl.radiusPx * s * (HANDLE_REACH + 0.05));
-  const canvas: Canvas = { width: bodyWidth + 2 * margin, height: bodyHeight, data: new Uint8Array((bodyWidth + 2 * margin) * bodyHeight * 4) };
+  const opening = Math.max(1, Math.round((bodyWidth / 2) * OPENING_TILT));
+  const canvasHeight = bodyHeight + opening;
+  const canvas: Canvas = { width: bodyWidth + 2 * margin, height: canvasHeight, oy: opening, data: new Uint8Array((bodyWidth + 2 * margin) * canvasHeight * 4) };
 
   // The print, reduced once to the preview's scale so each column is a plain lookup.
   // `print` may itself be a reduced render: only its aspect is assumed to be the template's.
@@ -53,7 +60,10 @@ export async function renderMugPreview(print: RgbaImage, template: Template, vie
   const stripTop = ((geometry.wrap.heightPx - geometry.trim.height) / 2 - geometry.trim.y) * s;
 
   const handle = handleInView(cyl, view);
-  const colours = { body: hexToRgb(blank.body), rim: hexToRgb(blank.rim ?? blank.body), handle: hexToRgb(blank.handle ?? blank.body) };
+  const colours = {
+    body: hexToRgb(blank.body), rim: hexToRgb(blank.rim ?? blank.body), handle: hexToRgb(blank.handle ?? blank.body), inside: hexToRgb(blank.inside ?? blank.body),
+  };
+  drawOpening(canvas, margin, bodyWidth, colours.inside, colours.rim);
   if (handle.side === 'behind') drawHandle(canvas, margin, bodyWidth, bodyHeight, cyl.radiusPx * s, handle.side, colours.handle);
   drawBody(canvas, margin, map.sourceX, map.shade, bodyHeight, colours.body, options.printHidden ? null : { small, pw, ph, kx, ky, stripTop, s });
   drawRim(canvas, margin, bodyWidth, bodyHeight, map.shade, colours.rim);
@@ -84,6 +94,26 @@ function drawBody(canvas: Canvas, left: number, sourceX: Float64Array, shade: Fl
         }
       }
       put(canvas, left + i, y, r * light, g * light, b * light);
+    }
+  }
+}
+
+/** The far half of the opening above the rim: the inside colour, darker towards the back, edged in the rim's colour. */
+function drawOpening(canvas: Canvas, left: number, width: number, inside: Rgb, rim: Rgb): void {
+  const a = width / 2;
+  const b = canvas.oy;
+  const cx = left + a;
+  const ring = Math.max(1.5, b * 0.18);
+  for (let y = -b; y < 0; y++) {
+    for (let x = Math.floor(cx - a); x <= Math.ceil(cx + a); x++) {
+      const d = Math.hypot((x + 0.5 - cx) / a, (y + 0.5) / b);
+      if (d > 1) continue;
+      if (d > 1 - ring / b) {
+        put(canvas, x, y, rim.r * 0.85, rim.g * 0.85, rim.b * 0.85);
+        continue;
+      }
+      const light = INSIDE_LIGHT.back + (INSIDE_LIGHT.front - INSIDE_LIGHT.back) * ((y + b) / b);
+      put(canvas, x, y, inside.r * light, inside.g * light, inside.b * light);
     }
   }
 }
@@ -124,8 +154,9 @@ function drawHandle(canvas: Canvas, left: number, bodyWidth: number, height: num
 }
 
 function put(canvas: Canvas, x: number, y: number, r: number, g: number, b: number): void {
-  if (x < 0 || y < 0 || x >= canvas.width || y >= canvas.height) return;
-  const i = (y * canvas.width + x) * 4;
+  const row = y + canvas.oy;
+  if (x < 0 || row < 0 || x >= canvas.width || row >= canvas.height) return;
+  const i = (row * canvas.width + x) * 4;
   canvas.data[i] = r;
   canvas.data[i + 1] = g;
   canvas.data[i + 2] = b;
