@@ -1,4 +1,5 @@
 import PgBoss from 'pg-boss';
+import { defaultUnpackLimits } from '../features/originals/unpack/unpack-limits';
 
 export const queueNames = { importOriginal: 'import-original', exportProduct: 'export-product' } as const;
 
@@ -29,19 +30,26 @@ export async function retryTransient<T>(work: () => Promise<T>, attempts = 5): P
   }
 }
 
+// A worker killed mid-import leaves its job active until the job expires; then it is retried from
+// the stored file. The unpack child is killed at its own time limit, and storing and committing
+// take seconds, so an import still active two minutes past that limit has lost its worker.
+export const IMPORT_JOB_EXPIRE_SECONDS = Math.ceil(defaultUnpackLimits.timeoutMs / 1000) + 120;
+
 // Postgres is the queue: jobs survive restarts and any number of worker processes share it.
 export async function startQueue(databaseUrl: string): Promise<JobQueue> {
   const boss = new PgBoss({ connectionString: databaseUrl, max: 4 });
   boss.on('error', (err) => console.error('[queue]', err.message));
   await boss.start();
-  await retryTransient(() => boss.createQueue(queueNames.importOriginal, {
+  const importPolicy = {
     name: queueNames.importOriginal,
-    // A worker killed mid-import leaves the job active; it expires and is retried from the stored file.
     retryLimit: 3,
     retryDelay: 5,
     retryBackoff: true,
-    expireInSeconds: 15 * 60,
-  }));
+    expireInSeconds: IMPORT_JOB_EXPIRE_SECONDS,
+  };
+  await retryTransient(() => boss.createQueue(queueNames.importOriginal, importPolicy));
+  // a queue made by an earlier version keeps its old policy unless told
+  await retryTransient(() => boss.updateQueue(queueNames.importOriginal, importPolicy));
   await retryTransient(() => boss.createQueue(queueNames.exportProduct, {
     name: queueNames.exportProduct,
     // An export renders again from the product and its motifs, so a retry is always safe.

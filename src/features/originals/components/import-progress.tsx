@@ -1,5 +1,5 @@
 import { useQueryClient } from '@tanstack/react-query';
-import { useEffect, useRef } from 'react';
+import { useEffect, useRef, useState } from 'react';
 import { Link } from 'react-router-dom';
 import type { OriginalSummary } from '@shared/contracts/originals';
 import { ProgressBar } from '../../../components/ui/progress-bar';
@@ -22,6 +22,7 @@ type ImportProgressProps = {
 // The import's phase and percent while it runs; then its outcome, once, politely announced.
 export function ImportProgress({ original, canImport, showName = false, onDeleted }: ImportProgressProps) {
   useRefreshWhenImported(original);
+  const stalled = useStalled(original);
   const name = showName ? (
     <Link to={`/originals/${original.id}`} className="font-semibold text-tide-deep underline">
       {original.name}
@@ -44,6 +45,12 @@ export function ImportProgress({ original, canImport, showName = false, onDelete
           percent={started ? original.percent : null}
         />
         <p className="text-sm text-ink-soft">Its motifs appear all at once when the import is complete. You can leave this page meanwhile.</p>
+        {stalled && (
+          <p role="status" className="text-sm text-ink">
+            This import has not moved for a while. If the server was restarted, it starts again from the stored file by
+            itself within a few minutes; nothing of it is lost.
+          </p>
+        )}
       </div>
     );
   }
@@ -66,6 +73,23 @@ export function ImportProgress({ original, canImport, showName = false, onDelete
       )}
     </StatusMessage>
   );
+}
+
+// An import whose phase and percent have not changed for this long has probably lost its worker
+// (the queue hands it to another once its job expires).
+export const STALLED_AFTER_MS = 90_000;
+
+function useStalled(original: OriginalSummary): boolean {
+  const running = original.status === 'importing';
+  const mark = `${original.status}:${original.phase}:${original.percent}`;
+  const [stalled, setStalled] = useState(false);
+  useEffect(() => {
+    setStalled(false);
+    if (!running) return;
+    const timer = setTimeout(() => setStalled(true), STALLED_AFTER_MS);
+    return () => clearTimeout(timer);
+  }, [mark, running]);
+  return stalled;
 }
 
 // When an import this page watched finishes, the lists that show its motifs are out of date.
