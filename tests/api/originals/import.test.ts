@@ -128,6 +128,24 @@ describe('bad uploads', () => {
     expect(await t.runtime.storage.exists(key)).toBe(false);
   });
 
+  // Header fields per Adobe's Photoshop File Formats Specification: colour mode 4 is CMYK; a PSD
+  // side is 1 to 30,000 px (PSB, version 2, up to 300,000).
+  it.each([
+    ['a CMYK document', () => psdHeader({ mode: 4, channels: 4 }), 'psd.unsupported_mode', /CMYK.*RGB and Grayscale are/],
+    ['a header claiming 30,001 px a side', () => psdHeader({ width: 30_001, height: 30_001 }), 'psd.bad_dimensions', /30001 x 30001.*1 to 30,000/],
+    ['a large-document header claiming 200,000 px a side', () => psdHeader({ version: 2, width: 200_000, height: 200_000 }), 'psd.document_too_large', /./],
+    ['a file cut off halfway', () => { const whole = smallCardPsd({ kiteColour: [7, 7, 7, 255] }); return whole.subarray(0, Math.floor(whole.length / 2)); }, /psd\.(truncated|corrupt)/, /damaged|truncated/],
+  ])('fails %s with its own message and keeps the file for a retry or delete', async (_what, file, code, message) => {
+    const res = await owner.upload('/api/originals', file(), 'bad.psd');
+    expect(res.status).toBe(202);
+    const failed = await waitForImport(owner, res.body.id);
+    expect(failed.status).toBe('failed');
+    expect(failed.error.code).toMatch(code);
+    expect(failed.error.message).toMatch(message);
+    expect(await t.runtime.storage.exists(`studios/${studioId}/originals/${res.body.id}/file`)).toBe(true);
+    expect((await owner.delete(`/api/originals/${res.body.id}`)).status).toBe(204);
+  });
+
   it('stores layer names with markup as plain text', async () => {
     const { writePsdBuffer } = await import('ag-psd');
     const { solidLayer } = await import('../support/psd-files');
