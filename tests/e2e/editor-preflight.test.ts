@@ -67,4 +67,26 @@ describe('the print check in the editor', () => {
     await page.getByLabel('As printed').uncheck();
     await notice.waitFor({ state: 'detached' });
   });
+
+  it('shows the layout on the mug from four sides, in the blank colour picked', async () => {
+    const preview = page.getByTestId('wrap-preview');
+    for (const side of ['front', 'handle right', 'back', 'handle left']) await preview.getByRole('img', { name: `The mug seen from the ${side} side` }).waitFor();
+    // a pixel near the middle of the front picture's body, away from the kite at the centre, and
+    // how many of the picture's pixels are the kite's colours rather than the blank's
+    const sample = (side: string) => page.evaluate((label) => {
+      const canvas = document.querySelector<HTMLCanvasElement>(`[data-testid="wrap-preview"] canvas[aria-label="${label}"]`)!;
+      const { data, width, height } = canvas.getContext('2d')!.getImageData(0, 0, canvas.width, canvas.height);
+      const at = (x: number, y: number) => [...data.subarray((y * width + x) * 4, (y * width + x) * 4 + 4)];
+      let coloured = 0;
+      for (let i = 0; i < data.length; i += 4) if (data[i + 3] === 255 && Math.abs(data[i] - data[i + 2]) > 40) coloured++;
+      return { body: at(Math.round(width / 2), Math.round(height * 0.6)), coloured };
+    }, `The mug seen from the ${side} side`);
+    // the kite faces the viewer on the front; the back shows the bare blank
+    await expect.poll(async () => (await sample('front')).coloured, { timeout: 10_000 }).toBeGreaterThan(20);
+    expect((await sample('back')).body[0]).toBeGreaterThan(200);
+    await preview.getByLabel('Blank colour').selectOption({ label: 'Heat-changing, cold' });
+    // the cold heat-changing blank is near black (#1c1c1f), shaded
+    await expect.poll(async () => (await sample('back')).body[0], { timeout: 5_000 }).toBeLessThan(40);
+    await browser.screenshot(page, 'editor-on-the-mug');
+  });
 });

@@ -19,6 +19,7 @@ import { PreflightPanel } from './preflight-panel';
 import { SaveStatusBar } from './save-status';
 import { SoftProofNotice, SoftProofToggle, useSoftProofView } from './soft-proof-toggle';
 import { useSaveStatus } from './use-editor-state';
+import { WrapPreview } from './wrap-preview';
 
 export type ProductEditorProps = {
   product: ProductDetail;
@@ -114,6 +115,7 @@ export function ProductEditorView({ product, save, reload, loadThumb }: ProductE
       </div>
       <div className="flex min-h-0 flex-col">
         <Inspector editor={editor} />
+        <WrapPreview editor={editor} template={product.template} loadThumb={loadThumb} />
         <PreflightPanel editor={editor} productId={product.id} savedRevision={savedRevision} />
       </div>
       <HelpSheet editor={editor} />
