@@ -5,7 +5,7 @@ import sharp from 'sharp';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { exportStatusSchema } from '../../shared/contracts/exports';
 import { motifListResponseSchema } from '../../shared/contracts/motifs';
-import { productDetailSchema } from '../../shared/contracts/products';
+import { productDetailSchema, type ProductDetail } from '../../shared/contracts/products';
 import { createMotifPlacement, createTextPlacement, type Layout, type MotifPlacement, type MotifPlacementInit, type TextPlacement } from '../../shared/scene';
 import { blankColoursOf, pointsToPixels, templatePixelSize } from '../../shared/templates';
 import { loadTestFontStack } from '../../shared/text/test-fonts';
@@ -57,10 +57,48 @@ async function serverPrintFile(productId: string): Promise<Buffer> {
     }
     const status = exportStatusSchema.parse(await answer.json());
     if (status.status === 'failed') throw new Error(`export failed: ${status.error?.message}`);
-    if (status.status === 'done') return Buffer.from(await (await api.get(`${appUrl}/api/exports/${id}/download?file=print-file.png`)).body());
+    if (status.status === 'done') {
+      // print-file.png, or .jpg for a template whose printer asks for JPEG
+      const file = status.files.find((f) => f.name.startsWith('print-file.'))!.name;
+      return Buffer.from(await (await api.get(`${appUrl}/api/exports/${id}/download?file=${file}`)).body());
+    }
     await new Promise((r) => setTimeout(r, 250));
   }
   throw new Error('the export did not finish in 120 s');
+}
+
+/** The product drawn by the editor's canvas renderer in Chromium and by the server's export job, as RGB, with their ΔE00 statistics. */
+async function compareRenders(productId: string, layout: Layout, template: ProductDetail['template'], label: string) {
+  const { width: W, height: H } = templatePixelSize(template);
+  const printFile = await serverPrintFile(productId);
+  const body = blankColoursOf(template).body;
+  // The print file keeps transparency; the editor shows it on the blank, so flatten it on the blank's colour.
+  const server = await sharp(printFile).flatten({ background: body }).removeAlpha().raw().toBuffer({ resolveWithObject: true });
+  expect([server.info.width, server.info.height]).toEqual([W, H]);
+
+  const motifPngs: Record<string, string> = {};
+  for (const p of layout.placements) {
+    if (p.type === 'text') continue;
+    const key = `${p.motifId}@${p.version}`;
+    if (motifPngs[key]) continue;
+    const png = await (await api.get(`${appUrl}/api/motifs/${p.motifId}/image?size=full&version=${p.version}`)).body();
+    motifPngs[key] = `data:image/png;base64,${png.toString('base64')}`;
+  }
+  await mkdir(screenshotDir, { recursive: true });
+  const renderer = await browser.newPage();
+  await renderer.setContent('<!doctype html><title>parity</title>');
+  await renderer.addScriptTag({ content: await bundleParityRenderer() });
+  const input: ParityRenderInput = { layout, template, motifPngs, width: W, height: H };
+  const dataUrl = await renderer.evaluate((i) => (globalThis as unknown as { renderForParity: (x: ParityRenderInput) => Promise<string> }).renderForParity(i), input);
+  await renderer.close();
+  const client = await sharp(Buffer.from(dataUrl.split(',')[1], 'base64')).removeAlpha().raw().toBuffer({ resolveWithObject: true });
+  expect([client.info.width, client.info.height]).toEqual([W, H]);
+
+  await writeFile(path.join(screenshotDir, `${label}-client.png`), Buffer.from(dataUrl.split(',')[1], 'base64'));
+  await sharp(server.data, { raw: { width: W, height: H, channels: 3 } }).png().toFile(path.join(screenshotDir, `${label}-server.png`));
+  const stats = deltaEStats(client.data, server.data, 3, 3, W * H);
+  console.log(`${label} ${W}x${H}: mean ΔE00 ${stats.mean.toFixed(3)}, p99 ${stats.p99.toFixed(2)}, max ${stats.max.toFixed(1)}, share over 5 ${(stats.over5Share * 100).toFixed(2)} %`);
+  return { client, server, stats };
 }
 
 describe('the editor’s canvas and the server’s print file', () => {
@@ -110,33 +148,7 @@ describe('the editor’s canvas and the server’s print file', () => {
     const layout: Layout = { ...created.layout, placements, mirror: false };
     await send('patch', `/api/products/${created.id}`, { revision: created.revision, layout });
 
-    const printFile = await serverPrintFile(created.id);
-    const body = blankColoursOf(template).body;
-    // The print file keeps transparency; the editor shows it on the blank, so flatten it on the blank's colour.
-    const server = await sharp(printFile).flatten({ background: body }).removeAlpha().raw().toBuffer({ resolveWithObject: true });
-    expect([server.info.width, server.info.height]).toEqual([W, H]);
-
-    const motifPngs: Record<string, string> = {};
-    for (const p of placements) {
-      if (p.type === 'text') continue;
-      const key = `${p.motifId}@${p.version}`;
-      if (motifPngs[key]) continue;
-      const png = await (await api.get(`${appUrl}/api/motifs/${p.motifId}/image?size=full&version=${p.version}`)).body();
-      motifPngs[key] = `data:image/png;base64,${png.toString('base64')}`;
-    }
-    await mkdir(screenshotDir, { recursive: true });
-    const renderer = await browser.newPage();
-    await renderer.setContent('<!doctype html><title>parity</title>');
-    await renderer.addScriptTag({ content: await bundleParityRenderer() });
-    const input: ParityRenderInput = { layout, template, motifPngs, width: W, height: H };
-    const dataUrl = await renderer.evaluate((i) => (globalThis as unknown as { renderForParity: (x: ParityRenderInput) => Promise<string> }).renderForParity(i), input);
-    const client = await sharp(Buffer.from(dataUrl.split(',')[1], 'base64')).removeAlpha().raw().toBuffer({ resolveWithObject: true });
-    expect([client.info.width, client.info.height]).toEqual([W, H]);
-
-    await writeFile(path.join(screenshotDir, 'parity-client.png'), Buffer.from(dataUrl.split(',')[1], 'base64'));
-    await sharp(server.data, { raw: { width: W, height: H, channels: 3 } }).png().toFile(path.join(screenshotDir, 'parity-server.png'));
-    const stats = deltaEStats(client.data, server.data, 3, 3, W * H);
-    console.log(`parity ${W}x${H}: mean ΔE00 ${stats.mean.toFixed(3)}, p99 ${stats.p99.toFixed(2)}, max ${stats.max.toFixed(1)}, share over 5 ${(stats.over5Share * 100).toFixed(2)} %`);
+    const { client, server, stats } = await compareRenders(created.id, layout, template, 'parity');
     // sanity: the layout really drew (not two blank strips agreeing)
     const inked = client.data.reduce((acc, v, i) => (i % 3 === 0 && v < 200 ? acc + 1 : acc), 0);
     expect(inked / (W * H)).toBeGreaterThan(0.2);
@@ -157,4 +169,17 @@ describe('the editor’s canvas and the server’s print file', () => {
     expect(stats.mean).toBeLessThan(1);
     expect(stats.p99).toBeLessThan(5);
   }, 150_000);
+
+  // The seeded products as the demo studio has them: card, sticker sheet, tote and both mugs.
+  it('agree on every demo product of the studio', async () => {
+    const { products } = (await (await api.get(`${appUrl}/api/products`)).json()) as { products: { id: string; name: string }[] };
+    const demo = products.filter((p) => /^(Puffin Picnic|Coastal Spring|Lantern Walk)/.test(p.name));
+    expect(demo.length).toBeGreaterThanOrEqual(5);
+    for (const summary of demo) {
+      const product = productDetailSchema.parse(await (await api.get(`${appUrl}/api/products/${summary.id}`)).json());
+      if (product.layout.placements.length === 0) continue;
+      const { stats } = await compareRenders(product.id, product.layout, product.template, `parity-${product.name.toLowerCase().replace(/[^a-z0-9]+/g, '-')}`);
+      expect({ product: product.name, meanUnder1: stats.mean < 1, p99Under5: stats.p99 < 5 }).toEqual({ product: product.name, meanUnder1: true, p99Under5: true });
+    }
+  }, 300_000);
 });
