@@ -74,7 +74,11 @@ export function createExportRunner(deps: ExportRunnerDeps) {
         if (variantRows.length) entries.push({ name: 'variants.csv', data: variantsCsv(variantRows) });
         await progress(0.65);
         const proofPng = encoded.contentType === 'image/png' ? encoded.buffer : (await encodePrintFile(render.image, { ...sources.template.output, format: 'png', transparency: 'keep' })).buffer;
-        entries.push({ name: `proof-sheet-${row.paper}.pdf`, data: await buildProofSheet({ png: proofPng, template: sources.template, productName: sources.product.name, paper: row.paper }) });
+        const proofName = `proof-sheet-${row.paper}.pdf`;
+        const proofSheet = await buildProofSheet({ png: proofPng, template: sources.template, productName: sources.product.name, paper: row.paper });
+        entries.push({ name: proofName, data: proofSheet });
+        // also on its own, to print straight from the page without opening the zip
+        await store(proofName, proofSheet, 'application/pdf');
         await progress(0.75);
         const preflight = await productPreflight(sources, null);
         const used = new Set(sources.product.layout.placements.flatMap((p) => (p.type === 'text' ? [] : [versionKey(p.motifId, p.version)])));

@@ -135,6 +135,10 @@ describe('export bundle', () => {
     const started = await owner.post(`/api/products/${productId}/exports`, { kind: 'bundle', paper: 'letter' });
     const done = await waitForExport(owner, started.body.id, 90_000);
     expect(done.status).toBe('done');
+    expect(done.files.map((f: { name: string }) => f.name).sort()).toEqual(['bundle.zip', 'print-file.png', 'proof-sheet-letter.pdf']);
+    // the proof sheet downloads on its own too: a PDF (ISO 32000 files start with %PDF-)
+    const proof = binary(await asBuffer(owner.get(`/api/exports/${started.body.id}/download?file=proof-sheet-letter.pdf`)).expect(200));
+    expect(proof.subarray(0, 5).toString('latin1')).toBe('%PDF-');
     const zip = binary(await asBuffer(owner.get(`/api/exports/${started.body.id}/download?file=bundle.zip`)).expect(200));
     const dir = mkdtempSync(path.join(tmpdir(), 'bundle-'));
     writeFileSync(path.join(dir, 'bundle.zip'), zip);

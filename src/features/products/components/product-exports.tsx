@@ -16,14 +16,20 @@ type Paper = 'a4' | 'letter';
 
 const kindOptions = [
   { value: 'print-file', label: 'Print file only', hint: 'The file the printer asks for, at the template’s exact size and DPI.' },
-  { value: 'bundle', label: 'Full pack (zip)', hint: 'Print files for each variant, previews, a proof sheet to print at actual size, a manifest and the cautions.' },
+  { value: 'bundle', label: 'Full pack (zip)', hint: 'Print files for each variant, previews, a proof sheet to print at actual size (also offered on its own), a manifest and the cautions.' },
 ] as const;
 const paperOptions = [
   { value: 'a4', label: 'A4' },
   { value: 'letter', label: 'US Letter' },
 ] as const;
 
-const fileLabels: Record<string, string> = { 'bundle.zip': 'Full pack (zip)', 'print-file.png': 'Print file (PNG)', 'print-file.jpg': 'Print file (JPEG)' };
+const fileLabels: Record<string, string> = {
+  'bundle.zip': 'Full pack (zip)',
+  'print-file.png': 'Print file (PNG)',
+  'print-file.jpg': 'Print file (JPEG)',
+  'proof-sheet-a4.pdf': 'Proof sheet (PDF, A4: print at actual size)',
+  'proof-sheet-letter.pdf': 'Proof sheet (PDF, US Letter: print at actual size)',
+};
 
 // Makes the printer's files from the saved layout: a job on the server with its own progress,
 // the usual cautions for food and heat shown before anything is downloaded.
