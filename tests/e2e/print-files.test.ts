@@ -28,7 +28,7 @@ afterAll(async () => {
 describe('print files from a product page', () => {
   it('shows the cautions, makes the print file and downloads it at the right pixels and DPI', async () => {
     await page.goto(`${appUrl}/products`);
-    await page.getByText('Puffin Picnic mug').first().click();
+    await page.getByRole('link', { name: 'Puffin Picnic mug', exact: true }).first().click();
     await page.getByRole('heading', { name: 'Print files' }).waitFor();
     await expect(page.getByText(/^Hot drinks:/).isVisible()).resolves.toBe(true);
     await expect(page.getByText(/^Microwave:/).isVisible()).resolves.toBe(true);
