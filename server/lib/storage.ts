@@ -38,8 +38,14 @@ export function createS3Client(config: Pick<AppConfig, 'S3_ENDPOINT' | 'S3_REGIO
   });
 }
 
-// Above this a known-length stream still goes up in parts, so one failed part is retried alone.
-const singlePutLimit = 64 * 1024 * 1024;
+// Above this a known-length stream goes up in parts, so one failed part is retried alone; below
+// it one request is cheaper than a multipart upload's create, parts and completion (S3's own
+// guidance is to consider multipart from about 100 MB: from memory). Measured against the local
+// fake with a 96 MB original: 0.5-0.75 s as one request, 1.0-1.3 s as 5 MB parts.
+const singlePutLimit = 100 * 1024 * 1024;
+// Parts of a multipart upload: fewer, larger requests than the SDK's 5 MB default; 4 in flight
+// hold 64 MB of memory at most.
+const PART_BYTES = 16 * 1024 * 1024;
 
 export function createStorage(client: S3Client, bucket: string): ObjectStorage {
   return {
@@ -55,7 +61,7 @@ export function createStorage(client: S3Client, bucket: string): ObjectStorage {
         return;
       }
       // Streams of unknown length go up in parts, never held whole in memory.
-      await new Upload({ client, params: { Bucket: bucket, Key: key, Body: body, ContentType: contentType } }).done();
+      await new Upload({ client, partSize: PART_BYTES, queueSize: 4, params: { Bucket: bucket, Key: key, Body: body, ContentType: contentType } }).done();
     },
     async get(key) {
       const res = await client.send(new GetObjectCommand({ Bucket: bucket, Key: key }));
