@@ -19,7 +19,7 @@ export type ImportBenchRow = { file: string; workerInProcess: boolean; wallMs: n
 // as `npm start` runs it (the worker in the web process, so the upload unpacks while it is
 // stored), then with the worker in a process of its own (`npm run worker`: the job downloads the
 // stored file first), both with a pre-started child.
-export async function benchImportEndToEnd(peers: UnpackBenchRow[], log: (line: string) => void = console.log): Promise<ImportBenchRow[]> {
+export async function benchImportEndToEnd(peers: UnpackBenchRow[], log: (line: string) => void = console.log, only?: string[]): Promise<ImportBenchRow[]> {
   const runtime = await openRuntime(parseConfig({ ...process.env, NODE_ENV: 'test' }));
   const rows: ImportBenchRow[] = [];
   const earlyUnpacks = createEarlyUnpacks({ runUnpack, maxRunning: 1 });
@@ -37,7 +37,7 @@ export async function benchImportEndToEnd(peers: UnpackBenchRow[], log: (line: s
     let timings: ImportPhaseTimings | undefined;
     // A worker keeps one child loaded between jobs, as `npm run worker` does.
     prewarmUnpackWorker(true);
-    const psds = await generateBenchPsds();
+    const psds = (await generateBenchPsds()).filter((p) => !only || only.includes(p.name));
     for (const [workerInProcess, psd] of [true, false].flatMap((inProcess) => psds.map((p) => [inProcess, p] as const))) {
       const shared = workerInProcess ? { earlyUnpacks } : {};
       const service = createOriginalsService({ repo, storage: runtime.storage, queue: { enqueueImport: async () => {} }, cleanup: createOriginalsCleanup(db, runtime.storage), ...shared });
