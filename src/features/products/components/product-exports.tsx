@@ -99,17 +99,23 @@ function EarlierExports({ product, except }: { product: ProductDetail; except: s
       <h3 id="earlier-exports" className="mb-1 text-sm font-semibold text-ink">Made earlier</h3>
       <ul className="flex flex-col divide-y divide-sand text-sm">
         {earlier.map((e) => (
-          <li key={e.id} className="flex flex-wrap items-center gap-x-3 gap-y-1 py-1.5">
-            <span className="text-ink">{kindNames[e.kind]}</span>
-            <span className="text-ink-soft tabular-nums">{when(e.createdAt)}</span>
-            {e.productRevision < product.revision && <span className="text-ink-soft">made from an earlier layout (revision {e.productRevision})</span>}
-            {e.status === 'failed' && <span className="text-rust">failed: {e.error?.message ?? 'no reason given'}</span>}
-            {(e.status === 'queued' || e.status === 'running') && <span className="text-ink-soft">still being made…</span>}
-            {e.status === 'done' && e.files.map((file) => (
-              <a key={file.name} className="text-tide-deep underline underline-offset-2" href={exportDownloadUrl(e.id, file.name)} download={file.name}>
-                {fileLabels[file.name] ?? file.name} · {formatBytes(file.bytes)}
-              </a>
-            ))}
+          <li key={e.id} className="flex flex-col gap-0.5 py-1.5">
+            <div className="flex flex-wrap items-baseline gap-x-3">
+              <span className="font-semibold text-ink">{kindNames[e.kind]}</span>
+              <span className="text-ink-soft tabular-nums">{when(e.createdAt)}</span>
+              {e.productRevision < product.revision && <span className="text-ink-soft">made from an earlier layout (revision {e.productRevision})</span>}
+              {e.status === 'failed' && <span className="text-rust">failed: {e.error?.message ?? 'no reason given'}</span>}
+              {(e.status === 'queued' || e.status === 'running') && <span className="text-ink-soft">still being made…</span>}
+            </div>
+            {e.status === 'done' && (
+              <div className="flex flex-wrap gap-x-4 gap-y-0.5">
+                {e.files.map((file) => (
+                  <a key={file.name} className="text-tide-deep underline underline-offset-2" href={exportDownloadUrl(e.id, file.name)} download={file.name}>
+                    {fileLabels[file.name] ?? file.name} · {formatBytes(file.bytes)}
+                  </a>
+                ))}
+              </div>
+            )}
           </li>
         ))}
       </ul>
