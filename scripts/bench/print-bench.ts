@@ -11,7 +11,7 @@ import type { SourcePixels } from '../../server/lib/image/affine-sample';
 import { renderMugPreview } from '../../server/lib/image/mug-preview';
 import { encodePrintFile, PRINT_PNG_OPTIONS } from '../../server/lib/image/print-file-encode';
 import { motifLayer, renderPrintFile } from '../../server/lib/image/print-render';
-import { releasePrintCanvas, warmDrawThreads } from '../../server/lib/image/draw-threads';
+import { releasePrintCanvas, setDrawThreads, warmDrawThreads } from '../../server/lib/image/draw-threads';
 
 export type PrintBenchResult = {
   size: { width: number; height: number };
@@ -82,6 +82,8 @@ export async function benchPrint(runs = 5): Promise<PrintBenchResult> {
 
   // As in the export worker, which starts its draw threads when it starts and keeps them: both
   // sides then get the same untimed warm-up runs (JIT for ours, caches and threads for libvips).
+  // the export worker's own setting, when given
+  if (process.env.PRINT_DRAW_THREADS) setDrawThreads(Number(process.env.PRINT_DRAW_THREADS));
   await warmDrawThreads();
   const oursOnce = async () => {
     const { image } = await renderPrintFile(plan, { loadMotif });
