@@ -37,7 +37,10 @@ export async function benchImportEndToEnd(peers: UnpackBenchRow[], log: (line: s
     let timings: ImportPhaseTimings | undefined;
     // A worker keeps one child loaded between jobs, as `npm run worker` does.
     prewarmUnpackWorker(true);
-    const psds = (await generateBenchPsds()).filter((p) => !only || only.includes(p.name));
+    const all = await generateBenchPsds();
+    const unknown = (only ?? []).filter((name) => !all.some((p) => p.name === name));
+    if (unknown.length) throw new Error(`no bench file named ${unknown.join(', ')} (there are ${all.map((p) => p.name).join(', ')})`);
+    const psds = all.filter((p) => !only || only.includes(p.name));
     for (const [workerInProcess, psd] of [true, false].flatMap((inProcess) => psds.map((p) => [inProcess, p] as const))) {
       const shared = workerInProcess ? { earlyUnpacks } : {};
       const service = createOriginalsService({ repo, storage: runtime.storage, queue: { enqueueImport: async () => {} }, cleanup: createOriginalsCleanup(db, runtime.storage), ...shared });

@@ -83,7 +83,11 @@ export async function benchPrint(runs = 5): Promise<PrintBenchResult> {
   // As in the export worker, which starts its draw threads when it starts and keeps them: both
   // sides then get the same untimed warm-up runs (JIT for ours, caches and threads for libvips).
   // the export worker's own setting, when given
-  if (process.env.PRINT_DRAW_THREADS) setDrawThreads(Number(process.env.PRINT_DRAW_THREADS));
+  const threads = process.env.PRINT_DRAW_THREADS;
+  if (threads !== undefined && threads !== '') {
+    if (!/^\d+$/.test(threads) || Number(threads) > 16) throw new Error(`PRINT_DRAW_THREADS must be a whole number from 0 to 16, not ${JSON.stringify(threads)}`);
+    setDrawThreads(Number(threads));
+  }
   await warmDrawThreads();
   const oursOnce = async () => {
     const { image } = await renderPrintFile(plan, { loadMotif });

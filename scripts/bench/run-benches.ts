@@ -19,7 +19,8 @@ try {
     console.log('\n== Import: unpacking against ImageMagick and the ag-psd + sharp floor ==');
     const peers = await benchUnpack();
     console.log('\n== Import end to end (storage, queue row, unpack, S3, DB) ==');
-    await benchImportEndToEnd(peers);
+    // BENCH_IMPORT_FILES=card times only the named files end to end
+    await benchImportEndToEnd(peers, console.log, process.env.BENCH_IMPORT_FILES?.split(',').filter(Boolean));
   }
   if (wanted('library')) {
     console.log('\n== Library search against a plain Postgres ILIKE ==');

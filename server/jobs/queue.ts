@@ -31,9 +31,10 @@ export async function retryTransient<T>(work: () => Promise<T>, attempts = 5): P
 }
 
 // A worker killed mid-import leaves its job active until the job expires; then it is retried from
-// the stored file. The unpack child is killed at its own time limit, and storing and committing
-// take seconds, so an import still active two minutes past that limit has lost its worker.
-export const IMPORT_JOB_EXPIRE_SECONDS = Math.ceil(defaultUnpackLimits.timeoutMs / 1000) + 120;
+// the stored file. The unpack child is killed at its own time limit; downloading a 1 GiB original
+// and storing a few thousand objects take a few minutes at most besides, so an import still active
+// six minutes past that limit has lost its worker (a live one re-claimed would unpack twice).
+export const IMPORT_JOB_EXPIRE_SECONDS = Math.ceil(defaultUnpackLimits.timeoutMs / 1000) + 6 * 60;
 
 // Postgres is the queue: jobs survive restarts and any number of worker processes share it.
 export async function startQueue(databaseUrl: string): Promise<JobQueue> {

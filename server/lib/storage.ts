@@ -43,9 +43,11 @@ export function createS3Client(config: Pick<AppConfig, 'S3_ENDPOINT' | 'S3_REGIO
 // guidance is to consider multipart from about 100 MB: from memory). Measured against the local
 // fake with a 96 MB original: 0.5-0.75 s as one request, 1.0-1.3 s as 5 MB parts.
 const singlePutLimit = 100 * 1024 * 1024;
-// Parts of a multipart upload: fewer, larger requests than the SDK's 5 MB default; 4 in flight
-// hold 64 MB of memory at most.
+// Parts of a multipart upload: fewer, larger requests than the SDK's 5 MB default; 3 in flight
+// plus the one being filled hold 64 MB per upload at most. A failed part is retried alone,
+// which a single streamed request cannot be (its body is read once).
 const PART_BYTES = 16 * 1024 * 1024;
+const PARTS_IN_FLIGHT = 3;
 
 export function createStorage(client: S3Client, bucket: string): ObjectStorage {
   return {
@@ -61,7 +63,7 @@ export function createStorage(client: S3Client, bucket: string): ObjectStorage {
         return;
       }
       // Streams of unknown length go up in parts, never held whole in memory.
-      await new Upload({ client, partSize: PART_BYTES, queueSize: 4, params: { Bucket: bucket, Key: key, Body: body, ContentType: contentType } }).done();
+      await new Upload({ client, partSize: PART_BYTES, queueSize: PARTS_IN_FLIGHT, params: { Bucket: bucket, Key: key, Body: body, ContentType: contentType } }).done();
     },
     async get(key) {
       const res = await client.send(new GetObjectCommand({ Bucket: bucket, Key: key }));

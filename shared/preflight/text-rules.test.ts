@@ -37,12 +37,15 @@ describe('text rules', () => {
     expect(severities(findingsOf('text-contrast', [whiteText], { texts: [{ placementId: 'title', backdropColour: '#000000' }] }))).toEqual(['ok:product']);
   });
 
-  it('with no variant chosen, also checks the variants’ blanks: dark text on the cold heat-changing mug', () => {
+  it('with no variant chosen, also checks the variants’ blanks where the print shows: dark text on a black one', () => {
     const darkText = text({ colour: '#222222' });
-    expect(findingsOf('text-contrast', [darkText], { template: mug11oz })).toMatchObject([
-      { severity: 'warning', message: expect.stringContaining('against the “Heat-changing, cold” blank') },
+    const withBlack = { ...mug11oz, variants: [...mug11oz.variants, { id: 'black', name: 'Black', blank: { body: '#111111' } }] };
+    expect(findingsOf('text-contrast', [darkText], { template: withBlack })).toMatchObject([
+      { severity: 'warning', message: expect.stringContaining('against the “Black” blank') },
     ]);
-    // the chosen variant alone counts: the white body reads well
-    expect(severities(findingsOf('text-contrast', [darkText], { template: mug11oz, variantId: 'heat-changing-warm' }))).toEqual(['ok:product']);
+    // the cold heat-changing blank hides the print, text too: nothing to read against it
+    expect(severities(findingsOf('text-contrast', [darkText], { template: mug11oz }))).toEqual(['ok:product']);
+    // the chosen variant alone counts
+    expect(severities(findingsOf('text-contrast', [darkText], { template: withBlack, variantId: 'heat-changing-warm' }))).toEqual(['ok:product']);
   });
 });

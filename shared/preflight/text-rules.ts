@@ -1,5 +1,5 @@
 import { contrastRatio, hexToRgb, parseHexColour, WCAG_THRESHOLDS } from '../colour';
-import { blankColoursOf } from '../templates';
+import { blankColoursOf, printHiddenOn } from '../templates';
 import { finding, passed, placementLabel, type PreflightContext } from './context';
 import type { Finding } from './types';
 
@@ -20,12 +20,14 @@ export function textSizeRule(ctx: PreflightContext): Finding[] {
   return findings.length || !texts(ctx).length ? findings : [passed('text-size', `All text is at least ${min} pt`)];
 }
 
-/** The blank colours text is checked against: the chosen variant's, or with none chosen the plain blank's and every variant's body that differs from it. */
+/** The blank colours text is checked against: the chosen variant's, or with none chosen the plain blank's and every variant's body that differs from it (where the print shows). */
 function backdropsOf(ctx: PreflightContext): { body: string; variant: string | null }[] {
   const { template, variantId } = ctx.input;
   if (variantId) return [{ body: blankColoursOf(template, variantId).body, variant: null }];
   const all = [{ body: template.blank.body, variant: null as string | null }];
   for (const v of template.variants) {
+    // on a cold heat-changing blank the coating hides the print, text and all
+    if (printHiddenOn(v.id)) continue;
     const body = blankColoursOf(template, v.id).body;
     if (!all.some((b) => b.body.toLowerCase() === body.toLowerCase())) all.push({ body, variant: v.name });
   }

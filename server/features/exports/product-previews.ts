@@ -1,5 +1,5 @@
 import type { PreviewView } from '../../../shared/contracts/exports';
-import { blankColoursOf, type BlankColours, type Template } from '../../../shared/templates';
+import { blankColoursOf, printHiddenOn, type BlankColours, type Template } from '../../../shared/templates';
 import { WRAP_VIEWS } from '../../../shared/wrap';
 import { renderFlatPreview, renderMugPreview } from '../../lib/image/mug-preview';
 import type { RgbaImage } from '../../lib/image/rgba-image';
@@ -14,7 +14,6 @@ export function previewViewsOf(template: Template): readonly PreviewView[] {
 }
 
 // A heat-changing blank's cold variant hides the print under its coating (variant ids of the built-ins).
-const isColdHeatChanging = (variantId: string | null) => variantId !== null && /heat-changing-cold/.test(variantId);
 
 /** Refuses views and variants the template does not have, before anything is rendered. */
 export function assertPreviewable(template: Template, view: PreviewView, variantId: string | null): void {
@@ -32,5 +31,5 @@ export async function productPreview(print: RgbaImage, template: Template, view:
 /** A preview on given blank colours (a product variant's); `templateVariantId` is the template blank they start from. */
 export async function previewOnBlank(print: RgbaImage, template: Template, view: PreviewView, blank: BlankColours, templateVariantId: string | null): Promise<Buffer> {
   if (view === 'flat') return renderFlatPreview(print, template, blank);
-  return renderMugPreview(print, template, view, blank, { printHidden: isColdHeatChanging(templateVariantId) });
+  return renderMugPreview(print, template, view, blank, { printHidden: printHiddenOn(templateVariantId) });
 }

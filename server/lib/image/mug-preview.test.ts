@@ -19,7 +19,7 @@ describe('mug previews', () => {
   const size = templatePixelSize(mug11oz);
   const print = halves(size.width, size.height);
 
-  it('shows the inside colour in the opening above the rim', async () => {
+  it('shows the inside colour in the opening, inside the body’s box (review pins keep their places)', async () => {
     const blue = { ...mug11oz.blank, inside: '#2e5e8c', handle: '#2e5e8c' };
     const coloured = await raw(await renderMugPreview(print, mug11oz, 'front', blue, { bodyWidth: 200 }));
     const white = await raw(await renderMugPreview(print, mug11oz, 'front', mug11oz.blank, { bodyWidth: 200 }));

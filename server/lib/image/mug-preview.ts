@@ -18,20 +18,20 @@ const SUPERSAMPLE = 2;
 const HANDLE_REACH = 0.55; // of the radius, out from the body
 const HANDLE_THICKNESS = 0.14; // of the radius
 const HANDLE_HEIGHT = 0.36; // half-height, of the body height
-const RIM_BAND = 0.025; // of the body height
 const HANDLE_LIGHT = 0.8;
-// The opening seen a little from above: its far half as an ellipse over the rim, this tall
-// against the body's half-width, in the inside colour (a look, not a measurement).
-const OPENING_TILT = 0.08;
+// The opening seen a little from above: its far half as an ellipse in the body's top rows (above
+// the print area on the mug wraps), this tall against the body's half-width, in the inside colour
+// (a look, not a measurement). Inside the body's box, so the preview keeps its size and review
+// pins, stored as fractions of it, keep their places.
+const OPENING_TILT = 0.07;
 const INSIDE_LIGHT = { back: 0.5, front: 0.78 };
 
-// oy: rows above the body (the opening); every draw's y is counted from the body's top.
-type Canvas = { data: Uint8Array; width: number; height: number; oy: number };
+type Canvas = { data: Uint8Array; width: number; height: number };
 
 /**
  * A mug seen from one side (orthographic): each column of the body copies the print file's
  * column that the shared column map names, on the blank's body colour, times the map's shade;
- * then the rim band and the handle in the blank's (variant's) colours.
+ * then the opening (edged in the rim's colour) and the handle in the blank's (variant's) colours.
  */
 export async function renderMugPreview(print: RgbaImage, template: Template, view: WrapView, blank: BlankColours, options: MugPreviewOptions = {}): Promise<Buffer> {
   const geometry = templateGeometry(template);
@@ -43,8 +43,7 @@ export async function renderMugPreview(print: RgbaImage, template: Template, vie
   const bodyHeight = Math.round(geometry.wrap.heightPx * s);
   const margin = Math.round(cyl.radiusPx * s * (HANDLE_REACH + 0.05));
   const opening = Math.max(1, Math.round((bodyWidth / 2) * OPENING_TILT));
-  const canvasHeight = bodyHeight + opening;
-  const canvas: Canvas = { width: bodyWidth + 2 * margin, height: canvasHeight, oy: opening, data: new Uint8Array((bodyWidth + 2 * margin) * canvasHeight * 4) };
+  const canvas: Canvas = { width: bodyWidth + 2 * margin, height: bodyHeight, data: new Uint8Array((bodyWidth + 2 * margin) * bodyHeight * 4) };
 
   // The print, reduced once to the preview's scale so each column is a plain lookup.
   // `print` may itself be a reduced render: only its aspect is assumed to be the template's.
@@ -63,10 +62,9 @@ export async function renderMugPreview(print: RgbaImage, template: Template, vie
   const colours = {
     body: hexToRgb(blank.body), rim: hexToRgb(blank.rim ?? blank.body), handle: hexToRgb(blank.handle ?? blank.body), inside: hexToRgb(blank.inside ?? blank.body),
   };
-  drawOpening(canvas, margin, bodyWidth, colours.inside, colours.rim);
   if (handle.side === 'behind') drawHandle(canvas, margin, bodyWidth, bodyHeight, cyl.radiusPx * s, handle.side, colours.handle);
   drawBody(canvas, margin, map.sourceX, map.shade, bodyHeight, colours.body, options.printHidden ? null : { small, pw, ph, kx, ky, stripTop, s });
-  drawRim(canvas, margin, bodyWidth, bodyHeight, map.shade, colours.rim);
+  drawOpening(canvas, margin, bodyWidth, opening, colours.inside, colours.rim);
   if (handle.side !== 'behind') drawHandle(canvas, margin, bodyWidth, bodyHeight, cyl.radiusPx * s, handle.side, colours.handle);
 
   return sharp(Buffer.from(canvas.data.buffer), { raw: { width: canvas.width, height: canvas.height, channels: 4 } })
@@ -98,29 +96,27 @@ function drawBody(canvas: Canvas, left: number, sourceX: Float64Array, shade: Fl
   }
 }
 
-/** The far half of the opening above the rim: the inside colour, darker towards the back, edged in the rim's colour. */
-function drawOpening(canvas: Canvas, left: number, width: number, inside: Rgb, rim: Rgb): void {
+/**
+ * The far half of the opening over the body's top rows: the inside colour, darker towards the
+ * back, edged in the rim's colour; beside it, above the front rim's curve, nothing (transparent).
+ */
+function drawOpening(canvas: Canvas, left: number, width: number, b: number, inside: Rgb, rim: Rgb): void {
   const a = width / 2;
-  const b = canvas.oy;
   const cx = left + a;
   const ring = Math.max(1.5, b * 0.18);
-  for (let y = -b; y < 0; y++) {
-    for (let x = Math.floor(cx - a); x <= Math.ceil(cx + a); x++) {
-      const d = Math.hypot((x + 0.5 - cx) / a, (y + 0.5) / b);
-      if (d > 1) continue;
-      if (d > 1 - ring / b) {
+  for (let y = 0; y < b; y++) {
+    for (let x = left; x < left + width; x++) {
+      const d = Math.hypot((x + 0.5 - cx) / a, (y + 0.5 - b) / b);
+      if (d > 1) {
+        clear(canvas, x, y);
+      } else if (d > 1 - ring / b) {
         put(canvas, x, y, rim.r * 0.85, rim.g * 0.85, rim.b * 0.85);
-        continue;
+      } else {
+        const light = INSIDE_LIGHT.back + (INSIDE_LIGHT.front - INSIDE_LIGHT.back) * (y / b);
+        put(canvas, x, y, inside.r * light, inside.g * light, inside.b * light);
       }
-      const light = INSIDE_LIGHT.back + (INSIDE_LIGHT.front - INSIDE_LIGHT.back) * ((y + b) / b);
-      put(canvas, x, y, inside.r * light, inside.g * light, inside.b * light);
     }
   }
-}
-
-function drawRim(canvas: Canvas, left: number, width: number, height: number, shade: Float32Array, rim: Rgb): void {
-  const band = Math.max(1, Math.round(height * RIM_BAND));
-  for (let i = 0; i < width; i++) for (let y = 0; y < band; y++) put(canvas, left + i, y, rim.r * shade[i], rim.g * shade[i], rim.b * shade[i]);
 }
 
 /** A D-shaped loop beside the body on a side view, or a bar across it when it faces the viewer. */
@@ -153,10 +149,14 @@ function drawHandle(canvas: Canvas, left: number, bodyWidth: number, height: num
   }
 }
 
+function clear(canvas: Canvas, x: number, y: number): void {
+  if (x < 0 || y < 0 || x >= canvas.width || y >= canvas.height) return;
+  canvas.data.fill(0, (y * canvas.width + x) * 4, (y * canvas.width + x) * 4 + 4);
+}
+
 function put(canvas: Canvas, x: number, y: number, r: number, g: number, b: number): void {
-  const row = y + canvas.oy;
-  if (x < 0 || row < 0 || x >= canvas.width || row >= canvas.height) return;
-  const i = (row * canvas.width + x) * 4;
+  if (x < 0 || y < 0 || x >= canvas.width || y >= canvas.height) return;
+  const i = (y * canvas.width + x) * 4;
   canvas.data[i] = r;
   canvas.data[i + 1] = g;
   canvas.data[i + 2] = b;

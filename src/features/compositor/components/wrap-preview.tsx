@@ -1,5 +1,5 @@
 import { useEffect, useMemo, useRef, useState } from 'react';
-import { blankColoursOf, templateGeometry, type Template } from '@shared/templates';
+import { blankColoursOf, printHiddenOn, templateGeometry, type Template } from '@shared/templates';
 import { WRAP_VIEWS, wrapCylinder, type WrapView } from '@shared/wrap';
 import { Button } from '../../../components/ui/button';
 import { Select } from '../../../components/ui/select-field';
@@ -25,12 +25,17 @@ export function WrapPreview({ editor, template, loadThumb }: { editor: ProductEd
   const [variantId, setVariantId] = useState<string>('');
   const canvases = useRef<Partial<Record<WrapView, HTMLCanvasElement | null>>>({});
   const [drawn, setDrawn] = useState(0);
+  // one cache of display bitmaps for the panel's life, whatever the colour picked or Hide/Show
+  const redraw = useRef<() => void>(() => {});
+  const cache = useMemo(() => new MotifImageCache(loadThumb, () => redraw.current()), [loadThumb]);
 
   useEffect(() => {
     if (!isWrap || !open) return;
     let frame = 0;
+    let disposed = false;
     const draw = () => {
       frame = 0;
+      if (disposed) return;
       const dpr = window.devicePixelRatio || 1;
       const stripScale = (STRIP_HEIGHT * dpr) / geometry.size.height;
       const strip = drawStrip(editor.getState().scene, template, geometry, images, stripScale);
@@ -41,24 +46,28 @@ export function WrapPreview({ editor, template, loadThumb }: { editor: ProductEd
         if (!canvas || !ctx) continue;
         canvas.width = Math.round(SIDE.width * dpr);
         canvas.height = Math.round(SIDE.height * dpr);
-        drawMugSide(ctx, canvas.width, canvas.height, strip, stripScale, geometry, view, blank);
+        drawMugSide(ctx, canvas.width, canvas.height, strip, stripScale, geometry, view, blank, printHiddenOn(variantId));
       }
       setDrawn((n) => n + 1);
     };
     const request = () => {
-      if (!frame) frame = requestAnimationFrame(draw);
+      if (!frame && !disposed) frame = requestAnimationFrame(draw);
     };
-    const images = new MotifImageCache(loadThumb, request);
+    // thumbnails arriving later redraw whichever drawing is current
+    redraw.current = request;
+    const images = cache;
     request();
     const off = editor.subscribe(request);
     return () => {
+      disposed = true;
       off();
       if (frame) cancelAnimationFrame(frame);
     };
-  }, [editor, template, geometry, isWrap, open, variantId, loadThumb]);
+  }, [editor, template, geometry, isWrap, open, variantId, cache]);
 
   if (!isWrap) return null;
   const variants = [{ value: '', label: 'Standard blank' }, ...template.variants.map((v) => ({ value: v.id, label: v.name }))];
+  const hidden = printHiddenOn(variantId);
   return (
     <section aria-labelledby="wrap-preview-heading" className="border-t border-l border-sand bg-paper px-3 py-2 text-sm" data-testid="wrap-preview" data-drawn={drawn}>
       <div className="flex items-center gap-2">
@@ -70,6 +79,7 @@ export function WrapPreview({ editor, template, loadThumb }: { editor: ProductEd
           {template.variants.length > 0 && (
             <Select aria-label="Blank colour" value={variantId} options={variants} className="border-sand text-sm" onChange={(e) => setVariantId(e.target.value)} />
           )}
+          {hidden && <p className="text-xs text-ink-soft">Cold, this blank’s coating hides the design; it shows once a hot drink is poured.</p>}
           <div className="grid grid-cols-4 gap-0.5" title="A quick look from the library’s thumbnails; the product page shows the full-size previews.">
             {WRAP_VIEWS.map((view) => (
               <figure key={view} className="m-0 flex flex-col items-center">

@@ -8,12 +8,11 @@ import type { MotifImageCache } from './image-cache';
 
 // The editor's live look at a wrap on its mug: the same column map and shading as the server's
 // previews (shared/wrap), drawn on a canvas from the editor's own display bitmaps. Our own
-// proportions for handle, rim and opening, as on the server (a look, not a measurement).
+// proportions for handle and opening (its edge is the rim), as on the server (a look, not a measurement).
 const HANDLE_REACH = 0.55;
 const HANDLE_THICKNESS = 0.14;
 const HANDLE_HEIGHT = 0.36;
-const RIM_BAND = 0.025;
-const OPENING_TILT = 0.08;
+const OPENING_TILT = 0.07;
 
 /** The print area's artwork at `pxPerTemplatePx`, on a transparent canvas, as the print file holds it. */
 export function drawStrip(scene: Scene, template: Template, geometry: TemplateGeometry, images: MotifImageCache, pxPerTemplatePx: number): HTMLCanvasElement | null {
@@ -32,19 +31,19 @@ const rgb = (c: { r: number; g: number; b: number }, k = 1) => `rgb(${Math.round
  * One side of the mug onto `ctx` (device px, `width` x `height`), from a strip drawn by drawStrip
  * at `stripScale` px per template px. Returns false for a template that is not a wrap.
  */
-export function drawMugSide(ctx: Ctx2D, width: number, height: number, strip: CanvasImageSource | null, stripScale: number, geometry: TemplateGeometry, view: WrapView, blank: BlankColours): boolean {
+export function drawMugSide(ctx: Ctx2D, width: number, height: number, strip: CanvasImageSource | null, stripScale: number, geometry: TemplateGeometry, view: WrapView, blank: BlankColours, printHidden = false): boolean {
   const cyl = wrapCylinder(geometry);
   if (!cyl || !geometry.wrap) return false;
   const wrapHeight = geometry.wrap.heightPx;
   // the body's width on screen, leaving room for the handle beside it
-  const fit = Math.min(width / (2 * cyl.radiusPx * (1 + HANDLE_REACH + 0.05)), (height * 0.92) / (wrapHeight + cyl.radiusPx * OPENING_TILT));
+  const fit = Math.min(width / (2 * cyl.radiusPx * (1 + HANDLE_REACH + 0.05)), (height * 0.92) / wrapHeight);
   const bodyWidth = Math.max(1, Math.round(2 * cyl.radiusPx * fit));
   const map = wrapToCylinder(cyl, view, { outputWidth: bodyWidth });
   const s = map.scale;
   const bodyHeight = wrapHeight * s;
   const opening = (bodyWidth / 2) * OPENING_TILT;
   const left = Math.round((width - bodyWidth) / 2);
-  const top = Math.round((height - bodyHeight - opening) / 2 + opening);
+  const top = Math.round((height - bodyHeight) / 2);
   const colours = {
     body: hexToRgb(blank.body), rim: hexToRgb(blank.rim ?? blank.body), handle: hexToRgb(blank.handle ?? blank.body), inside: hexToRgb(blank.inside ?? blank.body),
   };
@@ -55,19 +54,6 @@ export function drawMugSide(ctx: Ctx2D, width: number, height: number, strip: Ca
   ctx.clearRect(0, 0, width, height);
   // a handle behind the mug is hidden by the body
 
-  // the opening's far half over the rim, the inside colour darker towards the back
-  const inside = ctx.createLinearGradient(0, top - opening, 0, top);
-  inside.addColorStop(0, rgb(colours.inside, 0.5));
-  inside.addColorStop(1, rgb(colours.inside, 0.78));
-  ctx.beginPath();
-  ctx.ellipse(left + bodyWidth / 2, top, bodyWidth / 2, opening, 0, Math.PI, 2 * Math.PI);
-  ctx.closePath();
-  ctx.fillStyle = inside;
-  ctx.fill();
-  ctx.strokeStyle = rgb(colours.rim, 0.85);
-  ctx.lineWidth = Math.max(1, opening * 0.18);
-  ctx.stroke();
-
   // the body column by column: blank, the strip's column, then the shade over both
   const stripTop = top + ((wrapHeight - geometry.trim.height) / 2 - geometry.trim.y) * s;
   const drawnHeight = geometry.size.height * s;
@@ -77,7 +63,7 @@ export function drawMugSide(ctx: Ctx2D, width: number, height: number, strip: Ca
     ctx.fillStyle = rgb(colours.body);
     ctx.fillRect(x, top, 1, bodyHeight);
     const sx = map.sourceX[i];
-    if (strip && sx >= 0) {
+    if (strip && !printHidden && sx >= 0) {
       ctx.save();
       ctx.beginPath();
       ctx.rect(x, top, 1, bodyHeight);
@@ -87,9 +73,21 @@ export function drawMugSide(ctx: Ctx2D, width: number, height: number, strip: Ca
     }
     ctx.fillStyle = `rgba(0, 0, 0, ${(1 - map.shade[i]).toFixed(3)})`;
     ctx.fillRect(x, top, 1, bodyHeight);
-    ctx.fillStyle = rgb(colours.rim, map.shade[i]);
-    ctx.fillRect(x, top, 1, Math.max(1, bodyHeight * RIM_BAND));
   }
+  // the opening's far half in the body's top rows (as on the server): nothing beside it, the
+  // inside colour darker towards the back, edged in the rim's colour
+  ctx.clearRect(left, top, bodyWidth, opening);
+  const inside = ctx.createLinearGradient(0, top, 0, top + opening);
+  inside.addColorStop(0, rgb(colours.inside, 0.5));
+  inside.addColorStop(1, rgb(colours.inside, 0.78));
+  ctx.beginPath();
+  ctx.ellipse(left + bodyWidth / 2, top + opening, bodyWidth / 2, opening, 0, Math.PI, 2 * Math.PI);
+  ctx.closePath();
+  ctx.fillStyle = inside;
+  ctx.fill();
+  ctx.strokeStyle = rgb(colours.rim, 0.85);
+  ctx.lineWidth = Math.max(1, opening * 0.18);
+  ctx.stroke();
   if (handle.side !== 'behind') drawHandle(ctx, left, top, bodyWidth, bodyHeight, cyl.radiusPx * s, handle.side, colours.handle);
   return true;
 }

@@ -45,12 +45,9 @@ export function ImportProgress({ original, canImport, showName = false, onDelete
           percent={started ? original.percent : null}
         />
         <p className="text-sm text-ink-soft">Its motifs appear all at once when the import is complete. You can leave this page meanwhile.</p>
-        {stalled && (
-          <p role="status" className="text-sm text-ink">
-            This import has not moved for a while. If the server was restarted, it starts again from the stored file by
-            itself within a few minutes; nothing of it is lost.
-          </p>
-        )}
+        <p role="status" className="text-sm text-ink empty:hidden">
+          {stalled && 'This import has not moved for a while. If the server was restarted, it starts again from the stored file by itself within about ten minutes; nothing of it is lost.'}
+        </p>
       </div>
     );
   }
@@ -77,7 +74,7 @@ export function ImportProgress({ original, canImport, showName = false, onDelete
 
 // An import whose phase and percent have not changed for this long has probably lost its worker
 // (the queue hands it to another once its job expires).
-export const STALLED_AFTER_MS = 90_000;
+export const STALLED_AFTER_MS = 3 * 60_000;
 
 function useStalled(original: OriginalSummary): boolean {
   const running = original.status === 'importing';

@@ -36,7 +36,12 @@ export const productExportsKey = (productId: string) => ['exports', 'product', p
 
 // The product's earlier exports, so files made before stay at hand after leaving the page.
 export function useProductExports(productId: string) {
-  return useQuery({ queryKey: productExportsKey(productId), queryFn: ({ signal }) => getProductExports({ productId, signal }) });
+  return useQuery({
+    queryKey: productExportsKey(productId),
+    queryFn: ({ signal }) => getProductExports({ productId, signal }),
+    // while one of them is still being made (in another tab, or by someone else), look again
+    refetchInterval: (query) => (query.state.data?.exports.some((e) => e.status === 'queued' || e.status === 'running') ? 2000 : false),
+  });
 }
 
 export function useCreateProductExport() {

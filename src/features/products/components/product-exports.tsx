@@ -85,7 +85,7 @@ export function ProductExports({ product, canExport }: { product: ProductDetail;
 }
 
 const kindNames: Record<ExportStatusView['kind'], string> = { 'print-file': 'Print file', bundle: 'Full pack' };
-const when = (iso: string) => new Date(iso).toLocaleString(undefined, { day: 'numeric', month: 'short', hour: '2-digit', minute: '2-digit' });
+const when = (iso: string) => new Date(iso).toLocaleString(undefined, { day: 'numeric', month: 'short', year: 'numeric', hour: '2-digit', minute: '2-digit' });
 
 // Files made before (on this page or another visit), newest first, with their downloads.
 function EarlierExports({ product, except }: { product: ProductDetail; except: string | null }) {
@@ -93,7 +93,7 @@ function EarlierExports({ product, except }: { product: ProductDetail; except: s
   if (list.isPending) return <p className="text-sm text-ink-soft">Looking for files made earlier…</p>;
   if (list.isError) return <ErrorState title="Files made earlier could not be listed" error={list.error} onRetry={() => void list.refetch()} />;
   const earlier = list.data.exports.filter((e) => e.id !== except);
-  if (earlier.length === 0) return <p className="text-sm text-ink-soft">No print files made yet for this product.</p>;
+  if (earlier.length === 0) return except ? null : <p className="text-sm text-ink-soft">No print files made yet for this product.</p>;
   return (
     <section aria-labelledby="earlier-exports">
       <h3 id="earlier-exports" className="mb-1 text-sm font-semibold text-ink">Made earlier</h3>
@@ -112,6 +112,7 @@ function EarlierExports({ product, except }: { product: ProductDetail; except: s
                 {e.files.map((file) => (
                   <a key={file.name} className="text-tide-deep underline underline-offset-2" href={exportDownloadUrl(e.id, file.name)} download={file.name}>
                     {fileLabels[file.name] ?? file.name} · {formatBytes(file.bytes)}
+                    <span className="sr-only">, made {when(e.createdAt)}</span>
                   </a>
                 ))}
               </div>
