@@ -26,7 +26,16 @@ export type ObjectStorage = {
   ensureBucket(): Promise<void>;
 };
 
-export function createS3Client(config: Pick<AppConfig, 'S3_ENDPOINT' | 'S3_REGION' | 'S3_ACCESS_KEY_ID' | 'S3_SECRET_ACCESS_KEY' | 'S3_FORCE_PATH_STYLE'>) {
+// A storage that stops answering fails the request instead of holding a job or a page for ever:
+// 5 s to connect; 60 s without a byte either way on an open request (an idle time, not a total,
+// so a large upload that keeps moving is never cut off). A request that times out is retried by
+// the SDK like any other transient fault.
+export const S3_TIMEOUTS = { connectionTimeoutMs: 5_000, idleTimeoutMs: 60_000 };
+
+export function createS3Client(
+  config: Pick<AppConfig, 'S3_ENDPOINT' | 'S3_REGION' | 'S3_ACCESS_KEY_ID' | 'S3_SECRET_ACCESS_KEY' | 'S3_FORCE_PATH_STYLE'>,
+  timeouts: { connectionTimeoutMs: number; idleTimeoutMs: number } = S3_TIMEOUTS,
+) {
   return new S3Client({
     endpoint: config.S3_ENDPOINT ?? 'http://127.0.0.1:4568',
     region: config.S3_REGION,
@@ -35,6 +44,8 @@ export function createS3Client(config: Pick<AppConfig, 'S3_ENDPOINT' | 'S3_REGIO
     // Without these the SDK frames streamed bodies in a way S3-compatible fakes store verbatim.
     requestChecksumCalculation: 'WHEN_REQUIRED',
     responseChecksumValidation: 'WHEN_REQUIRED',
+    // socketTimeout is the idle limit on an open socket (requestTimeout would only warn)
+    requestHandler: { connectionTimeout: timeouts.connectionTimeoutMs, socketTimeout: timeouts.idleTimeoutMs },
   });
 }
 
