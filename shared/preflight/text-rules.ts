@@ -1,5 +1,5 @@
 import { contrastRatio, hexToRgb, parseHexColour, WCAG_THRESHOLDS } from '../colour';
-import { blankColoursOf, printHiddenOn } from '../templates';
+import { blankColoursOf } from '../templates';
 import { finding, passed, placementLabel, type PreflightContext } from './context';
 import type { Finding } from './types';
 
@@ -27,7 +27,7 @@ function backdropsOf(ctx: PreflightContext): { body: string; variant: string | n
   const all = [{ body: template.blank.body, variant: null as string | null }];
   for (const v of template.variants) {
     // on a cold heat-changing blank the coating hides the print, text and all
-    if (printHiddenOn(v.id)) continue;
+    if (v.hidesPrint) continue;
     const body = blankColoursOf(template, v.id).body;
     if (!all.some((b) => b.body.toLowerCase() === body.toLowerCase())) all.push({ body, variant: v.name });
   }

@@ -69,7 +69,7 @@ export const mug11oz: Template = {
   variants: [
     ...HANDLE_VARIANTS,
     // heat-changing blank: dark when cold, white when a hot drink is poured
-    { id: 'heat-changing-cold', name: 'Heat-changing, cold', blank: { body: '#1c1c1f', handle: '#1c1c1f', inside: '#1c1c1f' } },
+    { id: 'heat-changing-cold', name: 'Heat-changing, cold', blank: { body: '#1c1c1f', handle: '#1c1c1f', inside: '#1c1c1f' }, hidesPrint: true },
     { id: 'heat-changing-warm', name: 'Heat-changing, warm', blank: { handle: '#1c1c1f', inside: '#1c1c1f' } },
   ],
 };

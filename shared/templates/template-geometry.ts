@@ -89,8 +89,8 @@ function wrapGeometry(t: Template, trimX: number, pxPerUnit: number, trimWidth: 
 }
 
 /** The blank's colours with a variant's overrides applied; unknown variant ids fall back to the plain blank. */
-/** A heat-changing blank while cold: its coating hides the print, so the design is not seen on it. */
-export const printHiddenOn = (variantId: string | null | undefined): boolean => typeof variantId === 'string' && /heat-changing-cold/.test(variantId);
+/** The variant's coating hides the print (a heat-changing blank while cold): the design is not seen on it. */
+export const printHiddenOn = (t: Template, variantId: string | null | undefined): boolean => t.variants.some((v) => v.id === variantId && v.hidesPrint === true);
 
 export function blankColoursOf(t: Template, variantId?: string | null): BlankColours {
   const variant: TemplateVariant | undefined = t.variants.find((v) => v.id === variantId);

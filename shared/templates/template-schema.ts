@@ -54,6 +54,9 @@ export const templateVariantSchema = z.object({
   id: z.string().min(1).max(64),
   name: z.string().min(1).max(120),
   blank: blankColoursSchema.partial(),
+  // a blank whose coating hides the print (a heat-changing mug while cold): previews leave the
+  // design off and text is not checked against it
+  hidesPrint: z.boolean().optional(),
 });
 export type TemplateVariant = z.infer<typeof templateVariantSchema>;
 

@@ -13,8 +13,6 @@ export function previewViewsOf(template: Template): readonly PreviewView[] {
   return template.wrap ? WRAP_VIEWS : ['flat'];
 }
 
-// A heat-changing blank's cold variant hides the print under its coating (variant ids of the built-ins).
-
 /** Refuses views and variants the template does not have, before anything is rendered. */
 export function assertPreviewable(template: Template, view: PreviewView, variantId: string | null): void {
   if (!previewViewsOf(template).includes(view)) {
@@ -28,8 +26,12 @@ export async function productPreview(print: RgbaImage, template: Template, view:
   return previewOnBlank(print, template, view, blankColoursOf(template, variantId), variantId);
 }
 
-/** A preview on given blank colours (a product variant's); `templateVariantId` is the template blank they start from. */
+/**
+ * A preview on given blank colours (a product variant's); `templateVariantId` is the template blank
+ * they start from. A variant whose coating hides the print (a heat-changing blank while cold) is
+ * shown without it.
+ */
 export async function previewOnBlank(print: RgbaImage, template: Template, view: PreviewView, blank: BlankColours, templateVariantId: string | null): Promise<Buffer> {
   if (view === 'flat') return renderFlatPreview(print, template, blank);
-  return renderMugPreview(print, template, view, blank, { printHidden: printHiddenOn(templateVariantId) });
+  return renderMugPreview(print, template, view, blank, { printHidden: printHiddenOn(template, templateVariantId) });
 }

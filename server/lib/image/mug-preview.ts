@@ -2,7 +2,7 @@ import sharp from 'sharp';
 import { hexToRgb, type Rgb } from '../../../shared/colour';
 import type { BlankColours, Template } from '../../../shared/templates';
 import { templateGeometry } from '../../../shared/templates';
-import { handleInView, wrapCylinder, wrapToCylinder, type WrapView } from '../../../shared/wrap';
+import { handleInView, MUG_LOOK, wrapCylinder, wrapToCylinder, type WrapView } from '../../../shared/wrap';
 import type { RgbaImage } from './rgba-image';
 
 export type MugPreviewOptions = {
@@ -14,17 +14,9 @@ export type MugPreviewOptions = {
 
 // Drawn twice as large and reduced, so the silhouette and handle edges are anti-aliased.
 const SUPERSAMPLE = 2;
-// Our own proportions for the drawn handle and rim (a look, not a measurement).
-const HANDLE_REACH = 0.55; // of the radius, out from the body
-const HANDLE_THICKNESS = 0.14; // of the radius
-const HANDLE_HEIGHT = 0.36; // half-height, of the body height
-const HANDLE_LIGHT = 0.8;
-// The opening seen a little from above: its far half as an ellipse in the body's top rows (above
-// the print area on the mug wraps), this tall against the body's half-width, in the inside colour
-// (a look, not a measurement). Inside the body's box, so the preview keeps its size and review
-// pins, stored as fractions of it, keep their places.
-const OPENING_TILT = 0.07;
-const INSIDE_LIGHT = { back: 0.5, front: 0.78 };
+// Handle and opening as MUG_LOOK (shared with the editor) draws them. The opening's far half sits
+// in the body's top rows (above the print area on the mug wraps), so the preview keeps its size
+// and review pins, stored as fractions of it, keep their places.
 
 type Canvas = { data: Uint8Array; width: number; height: number };
 
@@ -41,8 +33,8 @@ export async function renderMugPreview(print: RgbaImage, template: Template, vie
   const map = wrapToCylinder(cyl, view, { outputWidth: bodyWidth });
   const s = map.scale; // output px per template px
   const bodyHeight = Math.round(geometry.wrap.heightPx * s);
-  const margin = Math.round(cyl.radiusPx * s * (HANDLE_REACH + 0.05));
-  const opening = Math.max(1, Math.round((bodyWidth / 2) * OPENING_TILT));
+  const margin = Math.round(cyl.radiusPx * s * (MUG_LOOK.handleReach + 0.05));
+  const opening = Math.max(1, Math.round((bodyWidth / 2) * MUG_LOOK.openingTilt));
   const canvas: Canvas = { width: bodyWidth + 2 * margin, height: bodyHeight, data: new Uint8Array((bodyWidth + 2 * margin) * bodyHeight * 4) };
 
   // The print, reduced once to the preview's scale so each column is a plain lookup.
@@ -110,9 +102,9 @@ function drawOpening(canvas: Canvas, left: number, width: number, b: number, ins
       if (d > 1) {
         clear(canvas, x, y);
       } else if (d > 1 - ring / b) {
-        put(canvas, x, y, rim.r * 0.85, rim.g * 0.85, rim.b * 0.85);
+        put(canvas, x, y, rim.r * MUG_LOOK.rimLight, rim.g * MUG_LOOK.rimLight, rim.b * MUG_LOOK.rimLight);
       } else {
-        const light = INSIDE_LIGHT.back + (INSIDE_LIGHT.front - INSIDE_LIGHT.back) * (y / b);
+        const light = MUG_LOOK.insideLight.back + (MUG_LOOK.insideLight.front - MUG_LOOK.insideLight.back) * (y / b);
         put(canvas, x, y, inside.r * light, inside.g * light, inside.b * light);
       }
     }
@@ -122,18 +114,18 @@ function drawOpening(canvas: Canvas, left: number, width: number, b: number, ins
 /** A D-shaped loop beside the body on a side view, or a bar across it when it faces the viewer. */
 function drawHandle(canvas: Canvas, left: number, bodyWidth: number, height: number, radius: number, side: 'left' | 'right' | 'in-front' | 'behind', colour: Rgb): void {
   const cy = height / 2;
-  const ay = height * HANDLE_HEIGHT;
-  const t = radius * HANDLE_THICKNESS;
+  const ay = height * MUG_LOOK.handleHalfHeight;
+  const t = radius * MUG_LOOK.handleThickness;
   if (side === 'left' || side === 'right') {
     const cx = side === 'right' ? left + bodyWidth : left;
-    const ax = radius * HANDLE_REACH;
+    const ax = radius * MUG_LOOK.handleReach;
     for (let y = Math.floor(cy - ay); y <= Math.ceil(cy + ay); y++) {
       for (let x = Math.floor(cx - ax); x <= Math.ceil(cx + ax); x++) {
         const outside = side === 'right' ? x >= cx : x < cx;
         if (!outside) continue;
         const outer = ((x - cx) / ax) ** 2 + ((y - cy) / ay) ** 2;
         const inner = ((x - cx) / (ax - t)) ** 2 + ((y - cy) / (ay - t)) ** 2;
-        if (outer <= 1 && inner > 1) put(canvas, x, y, colour.r * HANDLE_LIGHT, colour.g * HANDLE_LIGHT, colour.b * HANDLE_LIGHT);
+        if (outer <= 1 && inner > 1) put(canvas, x, y, colour.r * MUG_LOOK.handleLight, colour.g * MUG_LOOK.handleLight, colour.b * MUG_LOOK.handleLight);
       }
     }
     return;
@@ -143,7 +135,7 @@ function drawHandle(canvas: Canvas, left: number, bodyWidth: number, height: num
   for (let y = Math.floor(cy - ay); y <= Math.ceil(cy + ay); y++) {
     for (let x = Math.floor(cx - t); x <= Math.ceil(cx + t); x++) {
       const across = 1 - Math.abs(x - cx) / (t + 1);
-      const light = HANDLE_LIGHT * (0.75 + 0.25 * across);
+      const light = MUG_LOOK.handleLight * (0.75 + 0.25 * across);
       put(canvas, x, y, colour.r * light, colour.g * light, colour.b * light);
     }
   }

@@ -46,7 +46,7 @@ export function WrapPreview({ editor, template, loadThumb }: { editor: ProductEd
         if (!canvas || !ctx) continue;
         canvas.width = Math.round(SIDE.width * dpr);
         canvas.height = Math.round(SIDE.height * dpr);
-        drawMugSide(ctx, canvas.width, canvas.height, strip, stripScale, geometry, view, blank, printHiddenOn(variantId));
+        drawMugSide(ctx, canvas.width, canvas.height, strip, stripScale, geometry, view, blank, printHiddenOn(template, variantId));
       }
       setDrawn((n) => n + 1);
     };
@@ -67,7 +67,7 @@ export function WrapPreview({ editor, template, loadThumb }: { editor: ProductEd
 
   if (!isWrap) return null;
   const variants = [{ value: '', label: 'Standard blank' }, ...template.variants.map((v) => ({ value: v.id, label: v.name }))];
-  const hidden = printHiddenOn(variantId);
+  const hidden = printHiddenOn(template, variantId);
   return (
     <section aria-labelledby="wrap-preview-heading" className="border-t border-l border-sand bg-paper px-3 py-2 text-sm" data-testid="wrap-preview" data-drawn={drawn}>
       <div className="flex items-center gap-2">

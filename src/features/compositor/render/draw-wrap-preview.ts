@@ -2,17 +2,13 @@ import { hexToRgb } from '@shared/colour';
 import { scale } from '@shared/geometry';
 import { renderPlan, type Scene } from '@shared/scene';
 import type { BlankColours, Template, TemplateGeometry } from '@shared/templates';
-import { handleInView, wrapCylinder, wrapToCylinder, type WrapView } from '@shared/wrap';
+import { handleInView, MUG_LOOK, wrapCylinder, wrapToCylinder, type WrapView } from '@shared/wrap';
 import { drawArtwork, type Ctx2D } from './draw-scene';
 import type { MotifImageCache } from './image-cache';
 
 // The editor's live look at a wrap on its mug: the same column map and shading as the server's
-// previews (shared/wrap), drawn on a canvas from the editor's own display bitmaps. Our own
-// proportions for handle and opening (its edge is the rim), as on the server (a look, not a measurement).
-const HANDLE_REACH = 0.55;
-const HANDLE_THICKNESS = 0.14;
-const HANDLE_HEIGHT = 0.36;
-const OPENING_TILT = 0.07;
+// previews (shared/wrap), handle and opening as MUG_LOOK draws them there, from the editor's own
+// display bitmaps.
 
 /** The print area's artwork at `pxPerTemplatePx`, on a transparent canvas, as the print file holds it. */
 export function drawStrip(scene: Scene, template: Template, geometry: TemplateGeometry, images: MotifImageCache, pxPerTemplatePx: number): HTMLCanvasElement | null {
@@ -36,12 +32,12 @@ export function drawMugSide(ctx: Ctx2D, width: number, height: number, strip: Ca
   if (!cyl || !geometry.wrap) return false;
   const wrapHeight = geometry.wrap.heightPx;
   // the body's width on screen, leaving room for the handle beside it
-  const fit = Math.min(width / (2 * cyl.radiusPx * (1 + HANDLE_REACH + 0.05)), (height * 0.92) / wrapHeight);
+  const fit = Math.min(width / (2 * cyl.radiusPx * (1 + MUG_LOOK.handleReach + 0.05)), (height * 0.92) / wrapHeight);
   const bodyWidth = Math.max(1, Math.round(2 * cyl.radiusPx * fit));
   const map = wrapToCylinder(cyl, view, { outputWidth: bodyWidth });
   const s = map.scale;
   const bodyHeight = wrapHeight * s;
-  const opening = (bodyWidth / 2) * OPENING_TILT;
+  const opening = (bodyWidth / 2) * MUG_LOOK.openingTilt;
   const left = Math.round((width - bodyWidth) / 2);
   const top = Math.round((height - bodyHeight) / 2);
   const colours = {
@@ -78,14 +74,14 @@ export function drawMugSide(ctx: Ctx2D, width: number, height: number, strip: Ca
   // inside colour darker towards the back, edged in the rim's colour
   ctx.clearRect(left, top, bodyWidth, opening);
   const inside = ctx.createLinearGradient(0, top, 0, top + opening);
-  inside.addColorStop(0, rgb(colours.inside, 0.5));
-  inside.addColorStop(1, rgb(colours.inside, 0.78));
+  inside.addColorStop(0, rgb(colours.inside, MUG_LOOK.insideLight.back));
+  inside.addColorStop(1, rgb(colours.inside, MUG_LOOK.insideLight.front));
   ctx.beginPath();
   ctx.ellipse(left + bodyWidth / 2, top + opening, bodyWidth / 2, opening, 0, Math.PI, 2 * Math.PI);
   ctx.closePath();
   ctx.fillStyle = inside;
   ctx.fill();
-  ctx.strokeStyle = rgb(colours.rim, 0.85);
+  ctx.strokeStyle = rgb(colours.rim, MUG_LOOK.rimLight);
   ctx.lineWidth = Math.max(1, opening * 0.18);
   ctx.stroke();
   if (handle.side !== 'behind') drawHandle(ctx, left, top, bodyWidth, bodyHeight, cyl.radiusPx * s, handle.side, colours.handle);
@@ -94,15 +90,15 @@ export function drawMugSide(ctx: Ctx2D, width: number, height: number, strip: Ca
 
 function drawHandle(ctx: Ctx2D, left: number, top: number, bodyWidth: number, bodyHeight: number, radius: number, side: 'left' | 'right' | 'in-front', colour: { r: number; g: number; b: number }): void {
   const cy = top + bodyHeight / 2;
-  const ay = bodyHeight * HANDLE_HEIGHT;
-  const t = radius * HANDLE_THICKNESS;
-  ctx.fillStyle = rgb(colour, 0.8);
-  ctx.strokeStyle = rgb(colour, 0.8);
+  const ay = bodyHeight * MUG_LOOK.handleHalfHeight;
+  const t = radius * MUG_LOOK.handleThickness;
+  ctx.fillStyle = rgb(colour, MUG_LOOK.handleLight);
+  ctx.strokeStyle = rgb(colour, MUG_LOOK.handleLight);
   if (side === 'in-front') {
     ctx.fillRect(left + bodyWidth / 2 - t, cy - ay, 2 * t, 2 * ay);
     return;
   }
-  const ax = radius * HANDLE_REACH;
+  const ax = radius * MUG_LOOK.handleReach;
   const cx = side === 'right' ? left + bodyWidth : left;
   ctx.beginPath();
   ctx.lineWidth = t;

@@ -1,4 +1,4 @@
-import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { queryOptions, useMutation, useQuery } from '@tanstack/react-query';
 import { z } from 'zod';
 import { exportStatusSchema, productExportsSchema, type CreateExportRequest, type ExportStatusView } from '@shared/contracts/exports';
 import { apiRequest } from '../../../lib/api-client';
@@ -44,12 +44,9 @@ export function useProductExports(productId: string) {
   });
 }
 
+// The list of earlier exports is refreshed by the panel when a job ends (product-exports.tsx).
 export function useCreateProductExport() {
-  const client = useQueryClient();
-  return useMutation({
-    mutationFn: createProductExport,
-    onSettled: (_data, _error, { productId }) => void client.invalidateQueries({ queryKey: productExportsKey(productId) }),
-  });
+  return useMutation({ mutationFn: createProductExport });
 }
 
 /** The address a finished export's file downloads from (a plain link: the browser saves it). */
