@@ -57,7 +57,14 @@ export function WrapPreview({ editor, template, loadThumb }: { editor: ProductEd
     redraw.current = request;
     const images = cache;
     request();
-    const off = editor.subscribe(request);
+    // panels hear of selection changes too: redraw only when the layout itself changed
+    let scene = editor.getState().scene;
+    const off = editor.subscribe(() => {
+      const next = editor.getState().scene;
+      if (next === scene) return;
+      scene = next;
+      request();
+    });
     return () => {
       disposed = true;
       off();
