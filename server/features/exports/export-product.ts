@@ -39,7 +39,8 @@ export function createExportRunner(deps: ExportRunnerDeps) {
     const missing = missingMotifs(sources);
     if (missing.length) throw new ExportFailure('export.missing_motif', `${missing.length} placement(s) use a motif version that is no longer in the library; replace them, then export again.`);
     const bundle = row.kind === 'bundle';
-    const render = await renderProduct(sources, { onProgress: (d) => progress(0.05 + d * (bundle ? 0.35 : 0.8)) });
+    // the print file is encoded as it is drawn (a PNG keeping transparency is compressed band by band)
+    const render = await renderProduct(sources, { encode: true, onProgress: (d) => progress(0.05 + d * (bundle ? 0.35 : 0.8)) });
     try {
       await writeExport(render);
     } finally {
@@ -48,7 +49,7 @@ export function createExportRunner(deps: ExportRunnerDeps) {
     }
 
     async function writeExport(render: PrintRender): Promise<void> {
-      const encoded = await encodePrintFile(render.image, sources.template.output);
+      const encoded = render.encoded ?? await encodePrintFile(render.image, sources.template.output);
       const maxBytes = sources.template.output.maxFileSizeMb * 1024 * 1024;
       if (encoded.buffer.length > maxBytes) throw new ExportFailure('export.too_large', `The print file is ${(encoded.buffer.length / 1048576).toFixed(1)} MB; this printer takes at most ${sources.template.output.maxFileSizeMb} MB.`);
       const printName = `print-file.${encoded.extension}`;

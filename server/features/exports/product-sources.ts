@@ -66,9 +66,11 @@ export function scaledPlan(plan: RenderPlan, k: number): RenderPlan {
 }
 
 /** The print file (k = 1) or a smaller render of it whose longer side is at most maxSide. */
-export async function renderProduct(sources: ProductSources, options: { maxSide?: number; onProgress?: (done: number) => void | Promise<void> } = {}): Promise<PrintRender> {
+export async function renderProduct(sources: ProductSources, options: { maxSide?: number; onProgress?: (done: number) => void | Promise<void>; encode?: boolean } = {}): Promise<PrintRender> {
   const plan = renderPlan(sources.scene, sources.template);
   const longest = Math.max(plan.size.width, plan.size.height);
   const k = options.maxSide && longest > options.maxSide ? options.maxSide / longest : 1;
-  return renderPrintFile(k === 1 ? plan : scaledPlan(plan, k), { loadMotif: sources.loadMotif, drawText: drawTextLayer, onProgress: options.onProgress });
+  // only the print file itself (k = 1) is encoded, in the template's output format
+  const encode = options.encode && k === 1 ? sources.template.output : undefined;
+  return renderPrintFile(k === 1 ? plan : scaledPlan(plan, k), { loadMotif: sources.loadMotif, drawText: drawTextLayer, onProgress: options.onProgress, encode });
 }

@@ -1,5 +1,6 @@
 import { invert, type Affine, type Rect } from '../../../shared/geometry';
 import { endianness } from 'node:os';
+import { blendPixel, overPartly, type PixelBlend } from './composite-rgba';
 import type { RgbaImage } from './rgba-image';
 
 const LITTLE_ENDIAN = endianness() === 'LE';
@@ -39,7 +40,7 @@ export function drawTransformed(source: SourcePixels, matrix: Affine, clip: Rect
  * the source does not reach), so a caller can composite each row at once without holding the
  * whole transformed layer. Only columns [from, to) of a row are valid (zero where the sample is transparent).
  */
-export function sampleRows(source: SourcePixels, matrix: Affine, box: PixelBoxLike, onRow: (y: number, row: Uint8Array, from: number, to: number) => void): void {
+export function sampleRows(source: SourcePixels, matrix: Affine, box: PixelBoxLike, onRow: (y: number, row: Uint8Array, from: number, to: number) => void, onto?: DirectTarget): void {
   const inverse = invert(matrix);
   if (!inverse) return;
   const width = box.right - box.left;
@@ -59,6 +60,17 @@ export function sampleRows(source: SourcePixels, matrix: Affine, box: PixelBoxLi
     const [t0, t1] = span(u0, ia, -1, sw, span(v0, ib, -1, sh, [0, width]));
     const [f0, f1] = span(u0, ia, 0, sw - 1, span(v0, ib, 0, sh - 1, [t0, t1]));
     if (t1 <= t0) continue;
+    if (onto && src32 && f1 > f0) {
+      // the interior goes straight onto the canvas; only the anti-aliased ends pass through onRow
+      interiorRunOnto(src32, sw, onto.canvas.data, onto.words, onto.blend, (y - onto.canvas.top) * onto.canvas.width + box.left - onto.canvas.left, u0, v0, ia, ib, f0, f1);
+      for (const [from, to] of [[t0, f0], [f1, t1]]) {
+        if (to <= from) continue;
+        out.fill(0, from * 4, to * 4);
+        for (let x = from; x < to; x++) edgePixel(src, sw, sh, out, x * 4, u0 + ia * x, v0 + ib * x);
+        onRow(y, out, from, to);
+      }
+      continue;
+    }
     out.fill(0, t0 * 4, t1 * 4);
     for (let x = t0; x < t1; x++) {
       if (x === f0 && f1 > f0) {
@@ -74,6 +86,13 @@ export function sampleRows(source: SourcePixels, matrix: Affine, box: PixelBoxLi
 }
 
 type PixelBoxLike = { left: number; top: number; right: number; bottom: number };
+
+/**
+ * A canvas that samples are drawn straight onto, skipping the row buffer: `words` is a 32-bit
+ * view of its bytes, and the box must lie inside it. `blend` null is normal at full opacity (the
+ * commonest draw, with its own shortcuts); otherwise each sample goes through blendPixel.
+ */
+export type DirectTarget = { canvas: RgbaImage; words: Uint32Array; blend: PixelBlend | null };
 
 /** The x range [from, to) within `within` where lo < c0 + k·x < hi (strictly inside, as the samplers need). */
 function span(c0: number, k: number, lo: number, hi: number, within: [number, number]): [number, number] {
@@ -177,6 +196,68 @@ function interiorRunWords(src: Uint32Array, sw: number, out: Uint8Array, out32: 
     out[o + 1] = (w00 * ((p00 >>> 8) & 255) + w01 * ((p01 >>> 8) & 255) + w10 * ((p10 >>> 8) & 255) + w11 * ((p11 >>> 8) & 255)) * inv + 0.5;
     out[o + 2] = (w00 * ((p00 >>> 16) & 255) + w01 * ((p01 >>> 16) & 255) + w10 * ((p10 >>> 16) & 255) + w11 * ((p11 >>> 16) & 255)) * inv + 0.5;
     out[o + 3] = al + 0.5;
+  }
+}
+
+/**
+ * interiorRunWords drawn straight onto the canvas: each sample is computed with the same
+ * arithmetic, then composited as compositeOnto would composite the sampled row, so the bytes are
+ * identical. Normal at full opacity (blend null): an opaque sample, or one over a transparent
+ * canvas pixel, replaces the canvas word and a partly transparent one goes through overPartly,
+ * as in compositeNormalOpaque; any other blend or opacity goes through blendPixel. `base` is the
+ * canvas word index of the box's first column in this row.
+ */
+function interiorRunOnto(src: Uint32Array, sw: number, dst: Uint8Array, dst32: Uint32Array, blend: PixelBlend | null, base: number, u0: number, v0: number, ia: number, ib: number, from: number, to: number): void {
+  for (let x = from; x < to; x++) {
+    const u = u0 + ia * x;
+    const v = v0 + ib * x;
+    const x0 = u | 0;
+    const y0 = v | 0;
+    const fx = u - x0;
+    const fy = v - y0;
+    const j00 = y0 * sw + x0;
+    const p00 = src[j00];
+    const p01 = src[j00 + 1];
+    const p10 = src[j00 + sw];
+    const p11 = src[j00 + sw + 1];
+    const a00 = p00 >>> 24;
+    const a01 = p01 >>> 24;
+    const a10 = p10 >>> 24;
+    const a11 = p11 >>> 24;
+    if ((a00 | a01 | a10 | a11) === 0) continue;
+    const dp = base + x;
+    if ((a00 & a01 & a10 & a11) === 255) {
+      const g00 = (1 - fx) * (1 - fy);
+      const g01 = fx * (1 - fy);
+      const g10 = (1 - fx) * fy;
+      const g11 = fx * fy;
+      const r = (g00 * (p00 & 255) + g01 * (p01 & 255) + g10 * (p10 & 255) + g11 * (p11 & 255) + 0.5) | 0;
+      const g = (g00 * ((p00 >>> 8) & 255) + g01 * ((p01 >>> 8) & 255) + g10 * ((p10 >>> 8) & 255) + g11 * ((p11 >>> 8) & 255) + 0.5) | 0;
+      const b = (g00 * ((p00 >>> 16) & 255) + g01 * ((p01 >>> 16) & 255) + g10 * ((p10 >>> 16) & 255) + g11 * ((p11 >>> 16) & 255) + 0.5) | 0;
+      if (blend === null) dst32[dp] = (r | (g << 8) | (b << 16) | 0xff000000) >>> 0;
+      else blendPixel(dst, dp * 4, r, g, b, 255, 255, blend);
+      continue;
+    }
+    const w00 = (1 - fx) * (1 - fy) * a00;
+    const w01 = fx * (1 - fy) * a01;
+    const w10 = (1 - fx) * fy * a10;
+    const w11 = fx * fy * a11;
+    const al = w00 + w01 + w10 + w11;
+    if (al <= 0) continue;
+    // each value lies in [0.5, 255.5], so | 0 gives the byte a Uint8Array store would
+    const sa = (al + 0.5) | 0;
+    if (sa === 0) continue;
+    const inv = 1 / al;
+    const r = ((w00 * (p00 & 255) + w01 * (p01 & 255) + w10 * (p10 & 255) + w11 * (p11 & 255)) * inv + 0.5) | 0;
+    const g = ((w00 * ((p00 >>> 8) & 255) + w01 * ((p01 >>> 8) & 255) + w10 * ((p10 >>> 8) & 255) + w11 * ((p11 >>> 8) & 255)) * inv + 0.5) | 0;
+    const b = ((w00 * ((p00 >>> 16) & 255) + w01 * ((p01 >>> 16) & 255) + w10 * ((p10 >>> 16) & 255) + w11 * ((p11 >>> 16) & 255)) * inv + 0.5) | 0;
+    if (blend !== null) {
+      blendPixel(dst, dp * 4, r, g, b, sa, 255, blend);
+      continue;
+    }
+    const abByte = dst[dp * 4 + 3];
+    if (sa === 255 || abByte === 0) dst32[dp] = (r | (g << 8) | (b << 16) | (sa << 24)) >>> 0;
+    else overPartly(dst, dp * 4, r, g, b, sa, abByte);
   }
 }
 

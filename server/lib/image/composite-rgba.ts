@@ -61,10 +61,8 @@ export function compositeOnto(canvas: RgbaImage, source: RgbaImage, options: Com
     const words = wordViews(canvas, source);
     if (words) return compositeNormalOpaque(canvas, source, words, x0, y0, x1, y1);
   }
-  const opaqueTable = table && roundedTable(options.blendMode, table);
-  const clip = options.clipToBackdrop === true;
+  const blend = pixelBlend(options.blendMode, options.opacity, options.clipToBackdrop === true);
   const mask = options.mask ?? null;
-  const opacity255 = Math.min(1, options.opacity) / (255 * 255);
   const dst = canvas.data;
   const src = source.data;
   for (let y = y0; y < y1; y++) {
@@ -80,47 +78,73 @@ export function compositeOnto(canvas: RgbaImage, source: RgbaImage, options: Com
       let m = 255;
       if (mask) m = rowInMask && x >= maskX0 && x < maskX1 ? mask.data[maskBase + x] : mask.defaultColor;
       if (m === 0) continue;
-      const as = sa * m * opacity255;
-      const abByte = dst[di + 3];
-      if (abByte === 0) {
-        if (clip) continue;
-        dst[di] = src[si];
-        dst[di + 1] = src[si + 1];
-        dst[di + 2] = src[si + 2];
-        dst[di + 3] = (as * 255 + 0.5) | 0;
-        continue;
-      }
-      if (as >= 1) {
-        if (opaqueTable === null) {
-          dst[di] = src[si];
-          dst[di + 1] = src[si + 1];
-          dst[di + 2] = src[si + 2];
-          if (!clip) dst[di + 3] = 255;
-          continue;
-        }
-        if (abByte === 255) {
-          dst[di] = opaqueTable[(dst[di] << 8) | src[si]];
-          dst[di + 1] = opaqueTable[(dst[di + 1] << 8) | src[si + 1]];
-          dst[di + 2] = opaqueTable[(dst[di + 2] << 8) | src[si + 2]];
-          continue;
-        }
-      }
-      const ab = abByte / 255;
-      const ao = clip ? ab : as + ab - as * ab;
-      const wS = as * (1 - ab);
-      const wB = as * ab;
-      const wC = clip ? 1 - as : (1 - as) * ab;
-      const inv = clip ? 1 : 1 / ao;
-      for (let c = 0; c < 3; c++) {
-        const s = src[si + c];
-        const d = dst[di + c];
-        const b = table === null ? s : table[(d << 8) | s];
-        const co = (wS * s + wB * b + wC * d) * inv;
-        dst[di + c] = co <= 0 ? 0 : co >= 255 ? 255 : (co + 0.5) | 0;
-      }
-      dst[di + 3] = (ao * 255 + 0.5) | 0;
+      blendPixel(dst, di, src[si], src[si + 1], src[si + 2], sa, m, blend);
     }
   }
+}
+
+/** What blendPixel needs of a separable mode at an opacity: its tables, the opacity scaled for 8-bit alphas, source-atop or not. */
+export type PixelBlend = { table: Float64Array | null; opaqueTable: Uint8Array | null; opacity255: number; clip: boolean };
+
+/** The blend state for a separable mode (unknown modes draw as normal) at an opacity in 0..1. */
+export function pixelBlend(blendMode: string, opacity: number, clipToBackdrop = false): PixelBlend {
+  const table = blendTable(blendMode);
+  return { table, opaqueTable: table && roundedTable(blendMode, table), opacity255: Math.min(1, opacity) / (255 * 255), clip: clipToBackdrop };
+}
+
+/**
+ * One straight-RGBA source pixel (sa > 0, mask value m > 0) onto the canvas pixel at byte di with
+ * the general formula above; used by compositeOnto and by the sampler that draws straight onto
+ * the canvas (affine-sample.ts), so both give the same bytes.
+ */
+export function blendPixel(dst: Uint8Array, di: number, s0: number, s1: number, s2: number, sa: number, m: number, k: PixelBlend): void {
+  const as = sa * m * k.opacity255;
+  const abByte = dst[di + 3];
+  const clip = k.clip;
+  if (abByte === 0) {
+    if (clip) return;
+    dst[di] = s0;
+    dst[di + 1] = s1;
+    dst[di + 2] = s2;
+    dst[di + 3] = (as * 255 + 0.5) | 0;
+    return;
+  }
+  const table = k.table;
+  const d0 = dst[di];
+  const d1 = dst[di + 1];
+  const d2 = dst[di + 2];
+  if (as >= 1) {
+    const opaqueTable = k.opaqueTable;
+    if (opaqueTable === null) {
+      dst[di] = s0;
+      dst[di + 1] = s1;
+      dst[di + 2] = s2;
+      if (!clip) dst[di + 3] = 255;
+      return;
+    }
+    if (abByte === 255) {
+      dst[di] = opaqueTable[(d0 << 8) | s0];
+      dst[di + 1] = opaqueTable[(d1 << 8) | s1];
+      dst[di + 2] = opaqueTable[(d2 << 8) | s2];
+      return;
+    }
+  }
+  const ab = abByte / 255;
+  const ao = clip ? ab : as + ab - as * ab;
+  const wS = as * (1 - ab);
+  const wB = as * ab;
+  const wC = clip ? 1 - as : (1 - as) * ab;
+  const inv = clip ? 1 : 1 / ao;
+  const b0 = table === null ? s0 : table[(d0 << 8) | s0];
+  const b1 = table === null ? s1 : table[(d1 << 8) | s1];
+  const b2 = table === null ? s2 : table[(d2 << 8) | s2];
+  const c0 = (wS * s0 + wB * b0 + wC * d0) * inv;
+  const c1 = (wS * s1 + wB * b1 + wC * d1) * inv;
+  const c2 = (wS * s2 + wB * b2 + wC * d2) * inv;
+  dst[di] = c0 <= 0 ? 0 : c0 >= 255 ? 255 : (c0 + 0.5) | 0;
+  dst[di + 1] = c1 <= 0 ? 0 : c1 >= 255 ? 255 : (c1 + 0.5) | 0;
+  dst[di + 2] = c2 <= 0 ? 0 : c2 >= 255 ? 255 : (c2 + 0.5) | 0;
+  dst[di + 3] = (ao * 255 + 0.5) | 0;
 }
 
 const OPACITY_ONE = 1 / (255 * 255);
@@ -154,23 +178,33 @@ function compositeNormalOpaque(canvas: RgbaImage, source: RgbaImage, words: { ds
         dst32[dp] = src32[sp];
         continue;
       }
-      // the same operations in the same order as the general loop, so the bytes are identical
       const si = sp * 4;
-      const as = sa * 255 * OPACITY_ONE;
-      const ab = abByte / 255;
-      const ao = as + ab - as * ab;
-      const wS = as * (1 - ab);
-      const wB = as * ab;
-      const wC = (1 - as) * ab;
-      const inv = 1 / ao;
-      for (let c = 0; c < 3; c++) {
-        const s = src[si + c];
-        const co = (wS * s + wB * s + wC * dst[di + c]) * inv;
-        dst[di + c] = co <= 0 ? 0 : co >= 255 ? 255 : (co + 0.5) | 0;
-      }
-      dst[di + 3] = (ao * 255 + 0.5) | 0;
+      overPartly(dst, di, src[si], src[si + 1], src[si + 2], sa, abByte);
     }
   }
+}
+
+/**
+ * A partly transparent straight-RGBA pixel (sa in 1..254) drawn normal at full opacity over a
+ * canvas pixel that is not transparent (abByte > 0): the general loop's operations in the same
+ * order, so the bytes are identical. Shared by compositeNormalOpaque and the sampler that draws
+ * straight onto the canvas (affine-sample.ts).
+ */
+export function overPartly(dst: Uint8Array, di: number, r: number, g: number, b: number, sa: number, abByte: number): void {
+  const as = sa * 255 * OPACITY_ONE;
+  const ab = abByte / 255;
+  const ao = as + ab - as * ab;
+  const wS = as * (1 - ab);
+  const wB = as * ab;
+  const wC = (1 - as) * ab;
+  const inv = 1 / ao;
+  const c0 = (wS * r + wB * r + wC * dst[di]) * inv;
+  const c1 = (wS * g + wB * g + wC * dst[di + 1]) * inv;
+  const c2 = (wS * b + wB * b + wC * dst[di + 2]) * inv;
+  dst[di] = c0 <= 0 ? 0 : c0 >= 255 ? 255 : (c0 + 0.5) | 0;
+  dst[di + 1] = c1 <= 0 ? 0 : c1 >= 255 ? 255 : (c1 + 0.5) | 0;
+  dst[di + 2] = c2 <= 0 ? 0 : c2 >= 255 ? 255 : (c2 + 0.5) | 0;
+  dst[di + 3] = (ao * 255 + 0.5) | 0;
 }
 
 function compositeNonSeparable(

@@ -1,6 +1,7 @@
 import type { Affine, Rect } from '../../../shared/geometry';
-import { sampleRows, transformedBox, type SourcePixels } from './affine-sample';
-import { compositeOnto, type CompositeOptions } from './composite-rgba';
+import { sampleRows, transformedBox, type DirectTarget, type SourcePixels } from './affine-sample';
+import { nonSeparableBlends, separableBlends } from './blend-modes';
+import { compositeOnto, pixelBlend, type CompositeOptions } from './composite-rgba';
 import type { RgbaImage } from './rgba-image';
 
 /** A motif ready to sample: its pixels (the source, or its Lanczos reduction) and their matrix. */
@@ -23,13 +24,20 @@ export const bandCount = (height: number) => Math.ceil(height / BAND_ROWS);
  * pixels are those of drawing layer by layer; bands never share a row, so threads drawing
  * different parts never touch the same byte.
  */
-export function drawBands(canvas: RgbaImage, layers: DrawLayer[], part = 0, parts = 1, onBand?: (band: number) => void): void {
-  for (let band = part; band < bandCount(canvas.height); band += parts) {
-    const top = band * BAND_ROWS;
-    const bottom = Math.min(canvas.height, top + BAND_ROWS);
-    for (const layer of layers) drawBand(canvas, layer, top, bottom);
-    onBand?.(band);
-  }
+export function drawBands(canvas: RgbaImage, layers: DrawLayer[], part = 0, parts = 1): void {
+  for (let band = part; band < bandCount(canvas.height); band += parts) drawOneBand(canvas, layers, band);
+}
+
+/** The rows [top, bottom) of a band of the canvas. */
+export function bandRows(height: number, band: number): { top: number; bottom: number } {
+  const top = band * BAND_ROWS;
+  return { top, bottom: Math.min(height, top + BAND_ROWS) };
+}
+
+/** Draws every layer, in plan order, into one band of the canvas. */
+export function drawOneBand(canvas: RgbaImage, layers: DrawLayer[], band: number): void {
+  const { top, bottom } = bandRows(canvas.height, band);
+  for (const layer of layers) drawBand(canvas, layer, top, bottom);
 }
 
 function drawBand(canvas: RgbaImage, layer: DrawLayer, top: number, bottom: number): void {
@@ -61,7 +69,21 @@ export function drawPreparedMotif(canvas: RgbaImage, { pixels, matrix }: Prepare
     row.left = box.left + from;
     row.top = y;
     compositeOnto(canvas, row, composite);
-  });
+  }, directTarget(canvas, box, composite));
+}
+
+/**
+ * Samples go straight onto the canvas (the same bytes as compositing each sampled row, without
+ * the pass through a row buffer) for every separable blend without a mask or clipping, inside
+ * the canvas; everything else composites each row.
+ */
+function directTarget(canvas: RgbaImage, box: { left: number; top: number; right: number; bottom: number }, composite: CompositeOptions): DirectTarget | undefined {
+  if (composite.mask || composite.clipToBackdrop === true || composite.opacity <= 0 || nonSeparableBlends[composite.blendMode]) return undefined;
+  const { data } = canvas;
+  if (data.byteOffset % 4 !== 0 || data.length % 4 !== 0) return undefined;
+  if (box.left < canvas.left || box.top < canvas.top || box.right > canvas.left + canvas.width || box.bottom > canvas.top + canvas.height) return undefined;
+  const normalOpaque = composite.opacity >= 1 && (composite.blendMode === 'normal' || !separableBlends[composite.blendMode]);
+  return { canvas, words: new Uint32Array(data.buffer, data.byteOffset, data.length / 4), blend: normalOpaque ? null : pixelBlend(composite.blendMode, composite.opacity) };
 }
 
 export function intersect(a: Rect, b: Rect): Rect {

@@ -1,18 +1,25 @@
 // Body of a print-draw thread (draw-threads.ts): draws its share of a render's bands onto the
-// shared canvas, one layer at a time as they arrive, and says when the render's layers are done.
+// shared canvas, layer by layer as they arrive; at the end it draws the last layers band by band,
+// saying as each of its bands is final, then says the render is done.
 // Imports only the pure drawing code, never sharp.
 import { parentPort } from 'node:worker_threads';
-import { drawBands, type DrawLayer } from './draw-bands';
+import { bandCount, drawBands, drawOneBand, type DrawLayer } from './draw-bands';
 import type { RgbaImage } from './rgba-image';
 
 export type DrawRequest =
   | { kind: 'begin'; id: number; canvas: RgbaImage; part: number; parts: number }
   | { kind: 'layer'; id: number; layer: DrawLayer }
-  | { kind: 'end'; id: number };
-export type DrawReply = { id: number; ok: true } | { id: number; ok: false; message: string };
+  | { kind: 'end'; id: number; tail: DrawLayer[] };
+export type DrawReply =
+  | { id: number; ok: true }
+  | { id: number; ok: false; message: string }
+  // band `band` of the render is final (only sent while the render has not failed)
+  | { id: number; band: number };
 
 type Render = { canvas: RgbaImage; part: number; parts: number; error: string | null };
 const renders = new Map<number, Render>();
+
+const messageOf = (error: unknown) => (error instanceof Error ? error.message : String(error));
 
 parentPort?.on('message', (request: DrawRequest) => {
   if (request.kind === 'begin') {
@@ -26,11 +33,21 @@ parentPort?.on('message', (request: DrawRequest) => {
     try {
       drawBands(render.canvas, [request.layer], render.part, render.parts);
     } catch (error) {
-      render.error = error instanceof Error ? error.message : String(error);
+      render.error = messageOf(error);
     }
     return;
   }
   renders.delete(request.id);
+  if (render.error === null) {
+    try {
+      for (let band = render.part; band < bandCount(render.canvas.height); band += render.parts) {
+        drawOneBand(render.canvas, request.tail, band);
+        parentPort!.postMessage({ id: request.id, band } satisfies DrawReply);
+      }
+    } catch (error) {
+      render.error = messageOf(error);
+    }
+  }
   const reply: DrawReply = render.error === null ? { id: request.id, ok: true } : { id: request.id, ok: false, message: render.error };
   parentPort!.postMessage(reply);
 });

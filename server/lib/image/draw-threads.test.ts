@@ -1,9 +1,11 @@
 import { spawnSync } from 'node:child_process';
+import { PNG } from 'pngjs';
 import { fileURLToPath } from 'node:url';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { tsxCli } from '../../../scripts/services/repo-paths';
 import { compose, radians, rotate, scale, translate } from '../../../shared/geometry';
 import type { BlendMode, MotifDrawOp, RenderPlan } from '../../../shared/scene';
+import { mug11oz } from '../../../shared/templates';
 import { drawBands, type DrawLayer } from './draw-bands';
 import { printCanvas, setDrawThreads, startDrawing, warmDrawThreads } from './draw-threads';
 import { prepareMotif } from './motif-layer';
@@ -32,8 +34,10 @@ describe('print drawing shared with draw threads', () => {
 
   it('gives byte for byte the pixels of drawing every band on one thread', async () => {
     const { plan, motif } = bigPlan();
-    const { image } = await renderPrintFile(plan, { loadMotif: async () => motif });
+    const { image, encoded } = await renderPrintFile(plan, { loadMotif: async () => motif, encode: mug11oz.output });
     expect(image.data.buffer).toBeInstanceOf(SharedArrayBuffer);
+    // the PNG compressed band by band as this thread and the draw thread finished them (pngjs reads it)
+    expect(Buffer.compare(PNG.sync.read(encoded!.buffer).data, Buffer.from(image.data))).toBe(0);
     const expected = { data: new Uint8Array(1600 * 800 * 4), width: 1600, height: 800, left: 0, top: 0 };
     const layers: DrawLayer[] = [];
     for (const op of plan.ops as MotifDrawOp[]) layers.push({ kind: 'motif', motif: await prepareMotif(motif, op), clip: op.clip!, composite: { blendMode: op.blendMode, opacity: op.opacity } });
@@ -55,11 +59,31 @@ describe('print drawing shared with draw threads', () => {
     layers.slice(0, 3).forEach((l) => drawing.add(l));
     setDrawThreads(0); // the thread is terminated with layers still to draw
     layers.slice(3).forEach((l) => drawing.add(l));
-    await drawing.finish();
+    const told: number[] = [];
+    await drawing.finish((top, bottom) => told.push(top, bottom));
     expect(Buffer.compare(Buffer.from(canvas.data), Buffer.from(expected.data))).toBe(0);
+    // every band told once, top to bottom, though the dead thread's bands were drawn here last
+    expect(told).toEqual(Array.from({ length: 13 }, (_, b) => [b * 64, Math.min(800, b * 64 + 64)]).flat());
     setDrawThreads(1);
     await warmDrawThreads();
   }, 30_000);
+
+  it('draws layers that were ready early layer by layer and the rest band by band, to the same pixels', async () => {
+    const { plan, motif } = bigPlan();
+    const layers: DrawLayer[] = [];
+    for (const op of plan.ops as MotifDrawOp[]) layers.push({ kind: 'motif', motif: await prepareMotif(motif, op), clip: op.clip!, composite: { blendMode: op.blendMode, opacity: op.opacity } });
+    const expected = { data: new Uint8Array(1600 * 800 * 4), width: 1600, height: 800, left: 0, top: 0 };
+    drawBands(expected, layers);
+    const canvas = printCanvas(1600, 800);
+    const drawing = startDrawing(canvas);
+    layers.slice(0, 2).forEach((l) => drawing.add(l));
+    drawing.drawQueued();
+    layers.slice(2).forEach((l) => drawing.add(l));
+    const told: number[] = [];
+    await drawing.finish((top) => told.push(top));
+    expect(told).toEqual(Array.from({ length: 13 }, (_, b) => b * 64));
+    expect(Buffer.compare(Buffer.from(canvas.data), Buffer.from(expected.data))).toBe(0);
+  });
 
   it('never keeps a process alive once its render is done', () => {
     // a thread left referenced made the seed hang after its last line, and with it the test run

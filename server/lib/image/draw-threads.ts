@@ -2,7 +2,7 @@ import { createRequire } from 'node:module';
 import { availableParallelism } from 'node:os';
 import { pathToFileURL } from 'node:url';
 import { Worker } from 'node:worker_threads';
-import { BAND_ROWS, bandCount, drawBands, type DrawLayer } from './draw-bands';
+import { bandCount, bandRows, drawBands, drawOneBand, type DrawLayer } from './draw-bands';
 import type { DrawReply, DrawRequest } from './draw-thread-entry';
 import type { RgbaImage } from './rgba-image';
 
@@ -20,7 +20,7 @@ type DrawThread = {
   ready: boolean;
   /** Settles once the thread can draw, or has died trying. */
   started: Promise<void>;
-  pending: Map<number, { resolve: () => void; reject: (e: Error) => void }>;
+  pending: Map<number, { resolve: () => void; reject: (e: Error) => void; onBand: (band: number) => void }>;
 };
 
 let wanted = Math.max(0, Math.min(3, availableParallelism() - 1));
@@ -76,14 +76,30 @@ export function releasePrintCanvas(image: RgbaImage): void {
   spareCanvases = spareCanvases.filter((b) => (kept += b.byteLength) <= SPARE_CANVAS_BYTES);
 }
 
-/** Layers handed over one at a time, in plan order, as their pixels are ready; finish() resolves once all are drawn. */
-export type CanvasDrawing = { add(layer: DrawLayer): void; finish(): Promise<void> };
+/**
+ * Layers handed over one at a time, in plan order, as their pixels are ready. Queued layers are
+ * drawn on every band at once when the caller has time (drawQueued, while it waits for the next
+ * layer's pixels); finish() draws what is still queued band by band, top to bottom, so each band
+ * is final as early as it can be, and tells onBand of each band in order as it is final.
+ */
+export type CanvasDrawing = {
+  add(layer: DrawLayer): void;
+  drawQueued(): void;
+  finish(onBand?: OnBand): Promise<void>;
+};
+
+/** Rows [top, bottom) of the canvas are final; called top to bottom, once per band. */
+export type OnBand = (top: number, bottom: number) => void;
+
+// Between the bands it draws itself, the calling thread lets the event loop run, so the draw
+// threads' "band done" messages and the consumer of finished bands (zlib) keep moving.
+const turn = () => new Promise<void>((resolve) => setImmediate(resolve));
 
 /**
  * Starts drawing onto the canvas, sharing its bands with the draw threads that are ready
- * (starting them for next time if they are not). Each layer is drawn on this thread's bands as it
- * is added, and posted to the draw threads for theirs, so drawing overlaps the fetching and
- * resizing of the layers after it. A thread that fails or dies has its bands cleared and drawn
+ * (starting them for next time if they are not). A layer drawn early is drawn on this thread's
+ * bands and posted to the draw threads for theirs, so drawing overlaps the fetching and resizing
+ * of the layers after it. A thread that fails or dies has its unfinished bands cleared and drawn
  * here at the end, so a fault costs time, never pixels.
  */
 export function startDrawing(canvas: RgbaImage): CanvasDrawing {
@@ -91,30 +107,70 @@ export function startDrawing(canvas: RgbaImage): CanvasDrawing {
   if (shared) void warmDrawThreads();
   const helpers = shared ? threads.filter((t) => t.ready) : [];
   const parts = helpers.length + 1;
-  if (parts === 1) return { add: (layer) => drawBands(canvas, [layer], 0, 1), finish: async () => undefined };
+  const bands = bandCount(canvas.height);
+  const queued: DrawLayer[] = [];
+  const final = new Uint8Array(bands);
+  let told = 0;
+  let onBand: OnBand | undefined;
+  const markFinal = (band: number) => {
+    final[band] = 1;
+    for (; told < bands && final[told]; told++) {
+      const { top, bottom } = bandRows(canvas.height, told);
+      onBand?.(top, bottom);
+    }
+  };
+  if (parts === 1) {
+    return {
+      add: (layer) => void queued.push(layer),
+      drawQueued: () => drawBands(canvas, queued.splice(0)),
+      async finish(listener) {
+        onBand = listener;
+        const tail = queued.splice(0);
+        for (let band = 0; band < bands; band++) {
+          drawOneBand(canvas, tail, band);
+          markFinal(band);
+          if (listener) await turn();
+        }
+      },
+    };
+  }
   const id = nextId++;
   const layers: DrawLayer[] = [];
   const memory = sharedMemory();
-  const replies = helpers.map((thread, i) => ask(thread, id, { kind: 'begin', id, canvas, part: i + 1, parts }));
+  const replies = helpers.map((thread, i) => ask(thread, id, { kind: 'begin', id, canvas, part: i + 1, parts }, markFinal));
   for (const reply of replies) reply.catch(() => undefined);
   return {
-    add(layer) {
-      layers.push(layer);
-      const copy = memory.share(layer);
-      for (const thread of helpers) thread.worker.postMessage({ kind: 'layer', id, layer: copy } satisfies DrawRequest);
-      drawBands(canvas, [layer], 0, parts);
+    add: (layer) => void queued.push(layer),
+    drawQueued() {
+      for (const layer of queued.splice(0)) {
+        layers.push(layer);
+        const copy = memory.share(layer);
+        for (const thread of helpers) thread.worker.postMessage({ kind: 'layer', id, layer: copy } satisfies DrawRequest);
+        drawBands(canvas, [layer], 0, parts);
+      }
     },
-    async finish() {
-      for (const thread of helpers) thread.worker.postMessage({ kind: 'end', id } satisfies DrawRequest);
+    async finish(listener) {
+      onBand = listener;
+      const tail = queued.splice(0);
+      layers.push(...tail);
+      const copies = tail.map((layer) => memory.share(layer));
+      for (const thread of helpers) thread.worker.postMessage({ kind: 'end', id, tail: copies } satisfies DrawRequest);
+      for (let band = 0; band < bands; band += parts) {
+        drawOneBand(canvas, tail, band);
+        markFinal(band);
+        await turn();
+      }
       const results = await Promise.allSettled(replies);
       memory.release();
       results.forEach((r, i) => {
         if (r.status === 'fulfilled') return;
-        const part = i + 1;
-        for (let band = part; band < bandCount(canvas.height); band += parts) {
-          canvas.data.fill(0, band * BAND_ROWS * canvas.width * 4, Math.min(canvas.height, (band + 1) * BAND_ROWS) * canvas.width * 4);
+        for (let band = i + 1; band < bands; band += parts) {
+          if (final[band]) continue;
+          const { top, bottom } = bandRows(canvas.height, band);
+          canvas.data.fill(0, top * canvas.width * 4, bottom * canvas.width * 4);
+          drawOneBand(canvas, layers, band);
+          markFinal(band);
         }
-        drawBands(canvas, layers, part, parts);
       });
     },
   };
@@ -127,9 +183,9 @@ export async function drawLayers(canvas: RgbaImage, layers: DrawLayer[]): Promis
   await drawing.finish();
 }
 
-function ask(thread: DrawThread, id: number, request: DrawRequest): Promise<void> {
+function ask(thread: DrawThread, id: number, request: DrawRequest, onBand: (band: number) => void): Promise<void> {
   return new Promise<void>((resolve, reject) => {
-    thread.pending.set(id, { resolve, reject });
+    thread.pending.set(id, { resolve, reject, onBand });
     thread.worker.ref();
     thread.worker.postMessage(request);
   }).finally(() => {
@@ -153,6 +209,10 @@ function startThread(): DrawThread {
       return;
     }
     const waiting = thread.pending.get(message.id);
+    if ('band' in message) {
+      waiting?.onBand(message.band);
+      return;
+    }
     thread.pending.delete(message.id);
     if (message.ok) waiting?.resolve();
     else waiting?.reject(new Error(message.message));

@@ -10,6 +10,9 @@ export type EncodedPrintFile = { buffer: Buffer; contentType: 'image/png' | 'ima
 // for 6 % less, level 1 is a third faster but nearly twice the size.
 export const PRINT_PNG_OPTIONS = { compressionLevel: 6, adaptiveFiltering: false } as const;
 
+/** Outputs that renderPrintFile compresses while it draws (png-stream.ts): PNG keeping transparency. */
+export const streamsWhileDrawing = (output: OutputSpec) => output.format === 'png' && output.transparency === 'keep';
+
 // JPEG quality for print: high enough that blocking does not show on press (common practice, from memory).
 const JPEG_QUALITY = 95;
 

@@ -73,8 +73,11 @@ describe('print file renderer', () => {
     // 150 rows: three bands of the renderer, with turned motifs crossing both band edges
     const motif = { data: new Uint8Array(90 * 90 * 4), width: 90, height: 90 };
     for (let i = 0; i < motif.data.length; i += 4) motif.data.set([(i * 7) % 256, (i * 3) % 256, 120, i % 5 === 0 ? 90 : 255], i);
-    const modes: BlendMode[] = ['normal', 'multiply', 'overlay', 'normal'];
-    const ops = modes.map((blendMode, i) => op(`m${i}`, compose(translate(-45, -45), scale(1.4 - 0.25 * i), rotate(radians(0.4 * i + 0.1)), translate(60 + 60 * i, 75)), 90, 90, { blendMode, opacity: i === 3 ? 0.7 : 1, clip: { x: 0, y: 3, width: 300, height: 140 } }));
+    // normal at full opacity and the others each take their own shortcut straight onto the canvas;
+    // the expected picture composites whole sampled layers instead; the last two lie over the rest
+    const modes: BlendMode[] = ['normal', 'multiply', 'overlay', 'normal', 'normal', 'screen'];
+    const opacities = [1, 1, 1, 0.7, 1, 0.5];
+    const ops = modes.map((blendMode, i) => op(`m${i}`, compose(translate(-45, -45), scale(1.4 - 0.2 * (i % 4)), rotate(radians(0.4 * i + 0.1)), translate(60 + 60 * (i % 4) + 25 * Math.floor(i / 4), 75)), 90, 90, { blendMode, opacity: opacities[i], clip: { x: 0, y: 3, width: 300, height: 140 } }));
     const plan: RenderPlan = { size: { width: 300, height: 150 }, notes: [], ops };
     const { image } = await renderPrintFile(plan, { loadMotif: async () => motif });
     const expected = { data: new Uint8Array(300 * 150 * 4), width: 300, height: 150, left: 0, top: 0 };
@@ -84,6 +87,20 @@ describe('print file renderer', () => {
     }
     expect(Buffer.compare(Buffer.from(image.data), Buffer.from(expected.data))).toBe(0);
     expect(image.data.some((v, i) => i % 4 === 3 && v > 0 && Math.floor(i / 4 / 300) === 64)).toBe(true);
+  });
+
+  it('encodes the PNG print file while drawing, with the pixels it drew', async () => {
+    const motif = { data: new Uint8Array(90 * 90 * 4), width: 90, height: 90 };
+    for (let i = 0; i < motif.data.length; i += 4) motif.data.set([(i * 7) % 256, (i * 3) % 256, 120, i % 5 === 0 ? 90 : 255], i);
+    const plan: RenderPlan = { size: { width: 300, height: 150 }, notes: [], ops: [op('m', compose(translate(-45, -45), rotate(radians(0.3)), translate(150, 75)), 90, 90)] };
+    const { image, encoded } = await renderPrintFile(plan, { loadMotif: async () => motif, encode: mug11oz.output });
+    expect(encoded?.contentType).toBe('image/png');
+    // pngjs, an independent decoder
+    expect(Buffer.compare(PNG.sync.read(encoded!.buffer).data, Buffer.from(image.data))).toBe(0);
+    // a JPEG output is still encoded, by sharp, once the canvas is done
+    const jpeg = await renderPrintFile(plan, { loadMotif: async () => motif, encode: { ...mug11oz.output, format: 'jpeg', transparency: 'flatten' } });
+    expect(jpeg.encoded?.contentType).toBe('image/jpeg');
+    expect((await sharp(jpeg.encoded!.buffer).metadata()).density).toBe(300);
   });
 
   it('reports text placements it cannot draw rather than dropping them silently', async () => {

@@ -2,10 +2,13 @@ import sharp from 'sharp';
 import { applyRecolour, type Recolour } from '../../../shared/colour';
 import type { Rect } from '../../../shared/geometry';
 import type { MotifDrawOp, RenderPlan, TextDrawOp } from '../../../shared/scene';
+import type { OutputSpec } from '../../../shared/templates';
 import type { SourcePixels } from './affine-sample';
 import { intersect, type PreparedMotif } from './draw-bands';
 import { printCanvas, startDrawing } from './draw-threads';
 import { prepareMotif } from './motif-layer';
+import { encodePrintFile, streamsWhileDrawing, type EncodedPrintFile } from './print-file-encode';
+import { createPngStream } from './png-stream';
 import type { RgbaImage } from './rgba-image';
 
 export { motifLayer } from './motif-layer';
@@ -21,11 +24,17 @@ export type PrintRenderOptions = {
   drawText?: DrawTextLayer;
   /** 0..1 as sources are ready and bands drawn, for a job's progress. */
   onProgress?: (done: number) => void | Promise<void>;
+  /**
+   * Also encode the print file for this output. A PNG that keeps transparency is compressed band
+   * by band while the last layers are still being drawn (png-stream.ts); other outputs are
+   * encoded by sharp once the canvas is done.
+   */
+  encode?: OutputSpec;
 };
 
 export type PrintRenderNote = { placementId: string; code: 'render.text_skipped' | 'render.empty'; message: string };
 
-export type PrintRender = { image: RgbaImage; notes: PrintRenderNote[] };
+export type PrintRender = { image: RgbaImage; notes: PrintRenderNote[]; encoded?: EncodedPrintFile };
 
 // The share of onProgress reached once every op is drawn on this thread; the draw threads' last
 // bands have the rest.
@@ -73,25 +82,29 @@ export async function renderPrintFile(plan: RenderPlan, options: PrintRenderOpti
   };
   // Text is rasterised by librsvg on sharp's threads: all of it starts at once.
   const texts = new Map<number, Promise<RgbaImage | null>>();
+  const settled = new Set<number>();
   plan.ops.forEach((op, i) => {
-    if (op.kind === 'text' && options.drawText) texts.set(i, quiet(options.drawText(op, clipOf(op.clip, whole))));
+    if (op.kind === 'text' && options.drawText) texts.set(i, quiet(options.drawText(op, clipOf(op.clip, whole))).finally(() => settled.add(i)));
   });
 
-  // Each op is drawn as soon as its pixels are ready (fetches and sharp's work run a few ops
-  // ahead), onto this thread's bands of the canvas and, on a machine with cores to spare, the
-  // draw threads' bands too (draw-threads.ts): every pixel still sees the ops in plan order.
+  // Ops are drawn in plan order as their pixels are ready (fetches and sharp's work run a few
+  // ops ahead): the ready ones are drawn layer by layer while the next one is awaited, the rest
+  // band by band at the end, each band going to the PNG encoder once final. The draw threads
+  // (draw-threads.ts), on a machine with cores to spare, share the bands.
   const drawing = startDrawing(canvas);
   for (let i = 0; i < plan.ops.length; i++) {
     for (let k = i; k < Math.min(plan.ops.length, i + LOAD_AHEAD + 1); k++) {
       const ahead = plan.ops[k];
-      if (ahead.kind === 'motif') void preparedMotif(k, ahead);
+      if (ahead.kind === 'motif' && !prepared.has(k)) void preparedMotif(k, ahead).then(() => settled.add(k), () => settled.add(k));
     }
     const op = plan.ops[i];
     const composite = { blendMode: op.blendMode, opacity: op.opacity };
     if (op.kind === 'motif') {
+      if (!settled.has(i)) drawing.drawQueued();
       drawing.add({ kind: 'motif', motif: await preparedMotif(i, op), clip: clipOf(op.clip, whole), composite });
       prepared.delete(i);
     } else if (options.drawText) {
+      if (!settled.has(i)) drawing.drawQueued();
       const image = await texts.get(i)!;
       if (image) drawing.add({ kind: 'image', image, composite });
     } else {
@@ -99,9 +112,17 @@ export async function renderPrintFile(plan: RenderPlan, options: PrintRenderOpti
     }
     await options.onProgress?.(((i + 1) / plan.ops.length) * DRAWN_SHARE);
   }
-  await drawing.finish();
+  const output = options.encode;
+  const png = output && streamsWhileDrawing(output) ? createPngStream({ width, height, dpi: output.dpi }) : null;
+  try {
+    await drawing.finish(png ? (top, bottom) => png.writeRows(canvas.data.subarray(top * width * 4, bottom * width * 4)) : undefined);
+  } catch (error) {
+    png?.abort();
+    throw error;
+  }
+  const encoded = png ? { buffer: await png.finish(), contentType: 'image/png' as const, extension: 'png' as const } : output ? await encodePrintFile(canvas, output) : undefined;
   await options.onProgress?.(1);
-  return { image: canvas, notes };
+  return { image: canvas, notes, ...(encoded ? { encoded } : {}) };
 }
 
 const clipOf = (clip: Rect | null, whole: Rect) => (clip ? intersect(clip, whole) : whole);
