@@ -21,6 +21,7 @@ export type PrintBenchResult = {
   ratio: number;
   previewsMs: number;
   bytes: { ours: number; sharp: number };
+  medianRatio: number;
   pass: { ratio: boolean; previews: boolean };
 };
 
@@ -77,7 +78,22 @@ async function best<T>(runs: number, fn: () => Promise<T>): Promise<{ ms: number
   return winner!;
 }
 
-export async function benchPrint(runs = 5): Promise<PrintBenchResult> {
+async function inTurns<A, B>(runs: number, a: () => Promise<A>, b: () => Promise<B>): Promise<{ a: { ms: number; value: A }; b: { ms: number; value: B }; medianRatio: number }> {
+  let bestA: { ms: number; value: A } | null = null;
+  let bestB: { ms: number; value: B } | null = null;
+  const ratios: number[] = [];
+  for (let i = 0; i < runs; i++) {
+    const ra = await time(a);
+    const rb = await time(b);
+    if (!bestA || ra.ms < bestA.ms) bestA = ra;
+    if (!bestB || rb.ms < bestB.ms) bestB = rb;
+    ratios.push(ra.ms / rb.ms);
+  }
+  ratios.sort((x, y) => x - y);
+  return { a: bestA!, b: bestB!, medianRatio: ratios[Math.floor(ratios.length / 2)] };
+}
+
+export async function benchPrint(runs = 9): Promise<PrintBenchResult> {
   const { plan, motifs } = demoPlan();
   const loadMotif = async (id: string) => motifs.get(id)!;
 
@@ -98,7 +114,6 @@ export async function benchPrint(runs = 5): Promise<PrintBenchResult> {
     return encoded;
   };
   await best(WARM_UP_RUNS, oursOnce);
-  const ours = await best(runs, oursOnce);
 
   // The peer: the same layers already transformed (not timed), composited and encoded by sharp.
   const whole = { x: 0, y: 0, width: plan.size.width, height: plan.size.height };
@@ -113,7 +128,9 @@ export async function benchPrint(runs = 5): Promise<PrintBenchResult> {
       .png(PRINT_PNG_OPTIONS)
       .toBuffer();
   await best(WARM_UP_RUNS, peerOnce);
-  const peer = await best(runs, peerOnce);
+  // Taken in turns, ours then sharp's, so a busy spell on this shared host falls on both sides
+  // alike rather than on whichever happened to run during it; the best of each is compared.
+  const { a: ours, b: peer, medianRatio } = await inTurns(runs, oursOnce, peerOnce);
 
   const { image } = await renderPrintFile(plan, { loadMotif });
   const previews = await best(runs, async () => Promise.all(WRAP_VIEWS.map((v) => renderMugPreview(image, mug11oz, v, mug11oz.blank))));
@@ -126,15 +143,16 @@ export async function benchPrint(runs = 5): Promise<PrintBenchResult> {
     sharpCompositeMs: Math.round(peer.ms),
     ratio: Math.round(ratio * 100) / 100,
     previewsMs: Math.round(previews.ms),
+    medianRatio: Math.round(medianRatio * 100) / 100,
     bytes: { ours: ours.value!.buffer.length, sharp: peer.value.length },
     // targets from the issue: within 1.5x of sharp's composite; four previews under 1 s together
     pass: { ratio: ratio <= 1.5, previews: previews.ms < 1000 },
   };
-  console.log(`print file ${plan.size.width} x ${plan.size.height} px, ${layers.length} layers (best of ${runs})`);
+  console.log(`print file ${plan.size.width} x ${plan.size.height} px, ${layers.length} layers (best of ${runs}, taken in turns)`);
   console.log(`  render + PNG encode (ours):             ${result.renderEncodeMs} ms`);
   console.log(`  sharp composite() + encode, same layers: ${result.sharpCompositeMs} ms`);
   console.log(`  file sizes: ours ${(result.bytes.ours / 1e6).toFixed(2)} MB, sharp's ${(result.bytes.sharp / 1e6).toFixed(2)} MB (both zlib level 6, no row filters)`);
-  console.log(`  ratio ours / sharp: ${result.ratio}x (target <= 1.5x) ${result.pass.ratio ? 'PASS' : 'FAIL'}`);
+  console.log(`  ratio ours / sharp: ${result.ratio}x (target <= 1.5x) ${result.pass.ratio ? 'PASS' : 'FAIL'}; median of the ${runs} paired runs ${result.medianRatio}x`);
   console.log(`  four mug previews: ${result.previewsMs} ms (target < 1000 ms) ${result.pass.previews ? 'PASS' : 'FAIL'}`);
   return result;
 }

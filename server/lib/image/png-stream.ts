@@ -19,7 +19,7 @@ const ZLIB_HEADER = Buffer.from([0x78, 0x9c]);
 // sharp's level 6 (2.00 MB against 2.02 MB) in about the same time (64 ms against 64-78 ms).
 // Output is taken in pieces this large (a print file's band compresses to about 120 kB), so a
 // band costs one or two trips to the thread pool, not one per 16 kB.
-const DEFLATE = { level: 6, memLevel: 9, strategy: constants.Z_DEFAULT_STRATEGY, chunkSize: 256 * 1024 } as const;
+const DEFLATE = { level: 6, memLevel: 9, strategy: constants.Z_DEFAULT_STRATEGY, chunkSize: 128 * 1024 } as const;
 
 // Buffers for the filtered rows, reused band after band and render after render: on this kind
 // of host the first write to fresh memory costs several times the copy itself.
