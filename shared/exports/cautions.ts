@@ -16,7 +16,9 @@ export function cautionsFor(template: Template): string[] {
       'Microwave: do not call the mug microwave-safe unless the printer states it. Metallic inks, metal rims and enamelled metal mugs must never go in a microwave.',
     );
     if (name.includes('enamel')) lines.push('Enamel mugs are metal: not for the microwave, and the rim and handle get hot with hot drinks. Chipped enamel should not be used for food.');
-    if (template.variants.some((v) => v.id.startsWith('heat-changing'))) {
+    // a variant whose coating hides the print is a heat-changing blank's cold state; older custom
+    // templates copied from the built-in one may lack the flag but keep its ids
+    if (template.variants.some((v) => v.hidesPrint === true || v.id.startsWith('heat-changing'))) {
       lines.push('Heat-changing mugs: the coating is usually hand-wash only and not for the microwave; follow the printer\'s care notes and pass them on to buyers.');
     }
     lines.push('Food contact: whether a decorated mug may be sold for food and drink is set by local rules on food-contact materials; ask the printer for the declaration that covers the blank and inks.');
