@@ -66,5 +66,7 @@ export const productPreflightSchema = z.object({
   softProof: softProofSchema.extend({ deltaE: z.number(), renderWidth: z.number(), renderHeight: z.number() }),
   /** The studio's colour-group limit the palette was checked against. */
   paletteLimit: z.number().int().min(1).max(64),
+  /** The product's own variants' blanks that text contrast was also checked against. */
+  productBlanks: z.array(z.object({ name: z.string(), body: z.string() })),
 });
 export type ProductPreflightView = z.infer<typeof productPreflightSchema>;

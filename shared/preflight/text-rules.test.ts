@@ -48,4 +48,13 @@ describe('text rules', () => {
     // the chosen variant alone counts
     expect(severities(findingsOf('text-contrast', [darkText], { template: withBlack, variantId: 'heat-changing-warm' }))).toEqual(['ok:product']);
   });
+
+  it('with no variant chosen, also checks the product’s own variants’ blanks, such as a custom navy body', () => {
+    const darkText = text({ colour: '#222222' });
+    expect(findingsOf('text-contrast', [darkText], { template: mug11oz, productBlanks: [{ name: 'Navy 11 oz', body: '#1f2a44' }] })).toMatchObject([
+      { severity: 'warning', message: expect.stringContaining('against the “Navy 11 oz” blank') },
+    ]);
+    // one that matches the template's own blank adds nothing
+    expect(severities(findingsOf('text-contrast', [darkText], { template: mug11oz, productBlanks: [{ name: 'White', body: '#FBFAF7' }] }))).toEqual(['ok:product']);
+  });
 });

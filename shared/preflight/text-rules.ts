@@ -20,7 +20,7 @@ export function textSizeRule(ctx: PreflightContext): Finding[] {
   return findings.length || !texts(ctx).length ? findings : [passed('text-size', `All text is at least ${min} pt`)];
 }
 
-/** The blank colours text is checked against: the chosen variant's, or with none chosen the plain blank's and every variant's body that differs from it (where the print shows). */
+/** The blank colours text is checked against: the chosen variant's, or with none chosen the plain blank's and every template or product variant's body that differs from it (where the print shows). */
 function backdropsOf(ctx: PreflightContext): { body: string; variant: string | null }[] {
   const { template, variantId } = ctx.input;
   if (variantId) return [{ body: blankColoursOf(template, variantId).body, variant: null }];
@@ -30,6 +30,9 @@ function backdropsOf(ctx: PreflightContext): { body: string; variant: string | n
     if (v.hidesPrint) continue;
     const body = blankColoursOf(template, v.id).body;
     if (!all.some((b) => b.body.toLowerCase() === body.toLowerCase())) all.push({ body, variant: v.name });
+  }
+  for (const b of ctx.input.productBlanks ?? []) {
+    if (!all.some((a) => a.body.toLowerCase() === b.body.toLowerCase())) all.push({ body: b.body, variant: b.name });
   }
   return all;
 }

@@ -69,6 +69,9 @@ export type Finding = {
   fix: string;
 };
 
+/** A blank one of the product's own variants is printed on. */
+export type ProductBlank = { name: string; body: string };
+
 export type PreflightInput = {
   scene: Scene;
   template: Template;
@@ -76,6 +79,11 @@ export type PreflightInput = {
   texts?: readonly TextFacts[];
   /** The blank variant previewed, for the body colour text is checked against. */
   variantId?: string | null;
+  /**
+   * The product's own variants' blanks (a custom body colour, say), also checked against when no
+   * variant is chosen; blanks whose coating hides the print are left out by the caller.
+   */
+  productBlanks?: readonly ProductBlank[];
   paletteGroups?: readonly PaletteGroup[];
   softProof?: SoftProof | null;
   options?: Partial<PreflightOptions>;

@@ -1,5 +1,5 @@
 import { dominantColours } from '../../../shared/colour';
-import { preflightOptionsSchema, runPreflight, type MotifFacts, type PaletteGroup, type PreflightReport, type SoftProof } from '../../../shared/preflight';
+import { preflightOptionsSchema, runPreflight, type MotifFacts, type PaletteGroup, type PreflightReport, type ProductBlank, type SoftProof } from '../../../shared/preflight';
 import { softProof, SOFT_PROOF_DELTA_E } from '../../lib/image/soft-proof';
 import { renderProduct, versionKey, type ProductSources } from './product-sources';
 
@@ -15,6 +15,8 @@ export type ProductPreflight = {
   softProof: SoftProof & { deltaE: number; renderWidth: number; renderHeight: number };
   /** The studio's limit the palette was checked against, so the editor's live check uses the same. */
   paletteLimit: number;
+  /** The product's own variants' blanks text contrast was checked against, likewise. */
+  productBlanks: ProductBlank[];
 };
 
 /** The server's authoritative preflight: the shared rules fed with facts measured from the real pixels. */
@@ -26,8 +28,8 @@ export async function productPreflight(sources: ProductSources, variantId: strin
   const proof = await softProof(render.image);
   const soft: SoftProof = { shareOverDeltaE5: proof.shareOverDeltaE5, profileName: proof.profileName };
   const options = preflightOptionsSchema.parse(sources.preflightOptions);
-  const report = runPreflight({ scene: sources.scene, template: sources.template, motifs, variantId, paletteGroups: palette, softProof: soft, options });
-  return { report, motifs, palette, softProof: { ...soft, deltaE: SOFT_PROOF_DELTA_E, renderWidth: width, renderHeight: height }, paletteLimit: options.paletteLimit };
+  const report = runPreflight({ scene: sources.scene, template: sources.template, motifs, variantId, paletteGroups: palette, softProof: soft, options, productBlanks: sources.productBlanks });
+  return { report, motifs, palette, softProof: { ...soft, deltaE: SOFT_PROOF_DELTA_E, renderWidth: width, renderHeight: height }, paletteLimit: options.paletteLimit, productBlanks: sources.productBlanks };
 }
 
 async function motifFacts(sources: ProductSources): Promise<MotifFacts[]> {

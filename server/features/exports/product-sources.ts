@@ -1,12 +1,14 @@
 import { compose, scale } from '../../../shared/geometry';
 import { createScene, renderPlan, type RenderPlan, type Scene } from '../../../shared/scene';
-import type { Template } from '../../../shared/templates';
+import type { ProductBlank } from '../../../shared/preflight';
+import { printHiddenOn, type Template } from '../../../shared/templates';
 import { decodeMotifPng, renderPrintFile, type LoadMotifPixels, type PrintRender } from '../../lib/image/print-render';
 import type { SourcePixels } from '../../lib/image/affine-sample';
 import { drawTextLayer } from '../../lib/image/text-layer';
 import type { ObjectStorage } from '../../lib/storage';
 import type { ProductsService, ProductView } from '../products/products.service';
 import type { ExportsRepository, MotifVersionRecord } from './exports.repository';
+import { variantBlank } from './variant-print-files';
 
 export type ProductSources = {
   product: ProductView;
@@ -17,9 +19,11 @@ export type ProductSources = {
   loadMotif: LoadMotifPixels;
   /** The studio's own preflight settings (its colour-group limit). */
   preflightOptions: { paletteLimit?: number };
+  /** The product's own variants' blanks where the print shows, for text contrast. */
+  productBlanks: ProductBlank[];
 };
 
-export type SourceDeps = { products: Pick<ProductsService, 'detail'>; repo: Pick<ExportsRepository, 'motifVersions' | 'paletteLimit'>; storage: Pick<ObjectStorage, 'getBuffer'> };
+export type SourceDeps = { products: Pick<ProductsService, 'detail'>; repo: Pick<ExportsRepository, 'motifVersions' | 'paletteLimit' | 'productVariants'>; storage: Pick<ObjectStorage, 'getBuffer'> };
 
 export const versionKey = (motifId: string, version: number) => `${motifId}@${version}`;
 
@@ -27,7 +31,7 @@ export const versionKey = (motifId: string, version: number) => `${motifId}@${ve
 export async function productSources(deps: SourceDeps, studioId: string, productId: string): Promise<ProductSources> {
   const product = await deps.products.detail(studioId, productId);
   const ids = [...new Set(product.layout.placements.flatMap((p) => (p.type === 'text' ? [] : [p.motifId])))];
-  const [records, paletteLimit] = await Promise.all([deps.repo.motifVersions(studioId, ids), deps.repo.paletteLimit(studioId)]);
+  const [records, paletteLimit, variants] = await Promise.all([deps.repo.motifVersions(studioId, ids), deps.repo.paletteLimit(studioId), deps.repo.productVariants(studioId, productId)]);
   const versions = new Map(records.map((v) => [versionKey(v.motifId, v.version), v]));
   const decoded = new Map<string, Promise<SourcePixels>>();
   const loadMotif: LoadMotifPixels = (motifId, version) => {
@@ -41,7 +45,10 @@ export async function productSources(deps: SourceDeps, studioId: string, product
     }
     return p;
   };
-  return { product, template: product.template, scene: createScene(product.layout), versions, loadMotif, preflightOptions: paletteLimit ? { paletteLimit } : {} };
+  const productBlanks = variants
+    .filter((v) => !printHiddenOn(product.template, v.options.templateVariantId ?? null))
+    .map((v) => ({ name: v.name, body: variantBlank(product.template, v).body }));
+  return { product, template: product.template, scene: createScene(product.layout), versions, loadMotif, preflightOptions: paletteLimit ? { paletteLimit } : {}, productBlanks };
 }
 
 /** Placements whose motif version is not (or no longer) in the studio's library. */

@@ -39,6 +39,17 @@ function redPixels(png: Buffer): number {
   return n;
 }
 
+describe('preflight with product variants', () => {
+  it('checks text against the product’s own variants’ blanks and says which it used', async () => {
+    const res = await owner.get(`/api/products/${productId}/preflight`).expect(200);
+    expect(res.body.productBlanks).toEqual([
+      { name: 'Red handle', body: mug11oz.blank.body },
+      { name: 'Black handle', body: mug11oz.blank.body },
+      { name: 'Navy body', body: '#1f3a5f' },
+    ]);
+  });
+});
+
 describe('export bundle with product variants', () => {
   it('names the print file each variant takes by SKU, with previews on each variant’s own blank', async () => {
     const started = await owner.post(`/api/products/${productId}/exports`, { kind: 'bundle', paper: 'a4' });

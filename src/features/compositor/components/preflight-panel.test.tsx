@@ -20,6 +20,7 @@ const serverAnswer: ProductPreflightView = {
   palette: [{ hex: '#1d6f6a', share: 0.6 }, { hex: '#f6f1e8', share: 0.4 }],
   softProof: { shareOverDeltaE5: 0, profileName: 'FOGRA39', deltaE: 5, renderWidth: 1000, renderHeight: 412 },
   paletteLimit: 6,
+  productBlanks: [],
 };
 
 function setup() {

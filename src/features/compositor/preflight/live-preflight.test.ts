@@ -10,6 +10,7 @@ const server = (init: Partial<ProductPreflightView> = {}): ProductPreflightView 
   palette: [{ hex: '#1d6f6a', share: 1 }],
   softProof: { shareOverDeltaE5: 0, profileName: 'ISO Coated v2 300% (FOGRA39)', deltaE: 5, renderWidth: 1000, renderHeight: 412 },
   paletteLimit: 6,
+  productBlanks: [],
   ...init,
 });
 

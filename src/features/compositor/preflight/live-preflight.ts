@@ -41,8 +41,9 @@ export function livePreflight(layout: Layout, template: Template, server: Produc
     motifs: [...known.values(), ...provisional.values()],
     paletteGroups: server?.palette,
     softProof: server ? { shareOverDeltaE5: server.softProof.shareOverDeltaE5, profileName: server.softProof.profileName } : null,
-    // the studio's own limit, as the server checked it
+    // the studio's own limit and the product's own blanks, as the server checked them
     options: server ? { paletteLimit: server.paletteLimit } : undefined,
+    productBlanks: server?.productBlanks,
   });
   return { ...report, pendingPlacements };
 }
