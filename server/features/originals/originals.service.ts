@@ -22,7 +22,8 @@ type Deps = {
   earlyUnpacks?: Pick<EarlyUnpacks, 'begin'>;
 };
 
-const acceptedKinds = new Set(['psd', 'psb', 'png', 'jpeg', 'webp'] as const);
+// SVG drawings are sanitised before they are drawn (unpack/sanitise-svg.ts)
+const acceptedKinds = new Set(['psd', 'psb', 'png', 'jpeg', 'webp', 'svg'] as const);
 
 // File names come from users' machines: keep them as plain text, without control characters.
 export function cleanFileName(name: string): string {
@@ -95,11 +96,8 @@ export function createOriginalsService({ repo, storage, queue, cleanup, earlyUnp
       let early: EarlyUnpack | null = null;
       try {
         const sniffed = sniffFileType(await readHead(input.filePath));
-        if (sniffed.kind === 'svg') {
-          throw new HttpError(415, 'upload.svg_unsupported', 'SVG files are not accepted yet: export the artwork as a layered PSD or a PNG.');
-        }
         if (!acceptedKinds.has(sniffed.kind as 'psd')) {
-          throw new HttpError(415, 'upload.unsupported_type', `This file is ${sniffed.label}, not a PSD or an image Motifold can read. Upload a layered PSD, or a PNG, JPEG or WebP.`);
+          throw new HttpError(415, 'upload.unsupported_type', `This file is ${sniffed.label}, not a PSD or an image Motifold can read. Upload a layered PSD, a PNG, JPEG or WebP, or an SVG drawing.`);
         }
         let lineageId: string = randomUUID();
         if (input.previousOriginalId) {

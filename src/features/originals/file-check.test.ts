@@ -27,6 +27,11 @@ describe('checking a file before it is uploaded as an original', () => {
     expect(fileKindOf({ name: 'poster.PSB', type: '' })).toBe('psd');
   });
 
+  it('takes SVG drawings, which the server sanitises before drawing them', () => {
+    expect(checkOriginalFile(file('tide-pool.svg'))).toBeNull();
+    expect(fileKindOf({ name: 'drawing', type: 'image/svg+xml' })).toBe('svg');
+  });
+
   it('refuses a file over the limit before sending a byte, and an empty one', () => {
     expect(checkOriginalFile(file('big.psd', 2049), 2048)?.code).toBe('upload.too_large');
     expect(checkOriginalFile(file('big.psd', 2048), 2048)).toBeNull();

@@ -6,7 +6,7 @@
 // the server's 413 message, shown as it is.
 export const UPLOAD_LIMIT_BYTES = 1024 ** 3;
 
-export type OriginalFileKind = 'psd' | 'png' | 'jpeg' | 'webp';
+export type OriginalFileKind = 'psd' | 'png' | 'jpeg' | 'webp' | 'svg';
 
 // Large-document PSB files unpack like PSD ones, within the same pixel limits.
 const kindsByExtension: Record<string, OriginalFileKind> = {
@@ -16,6 +16,7 @@ const kindsByExtension: Record<string, OriginalFileKind> = {
   jpg: 'jpeg',
   jpeg: 'jpeg',
   webp: 'webp',
+  svg: 'svg',
 };
 
 const kindsByMime: Record<string, OriginalFileKind> = {
@@ -26,10 +27,11 @@ const kindsByMime: Record<string, OriginalFileKind> = {
   'image/png': 'png',
   'image/jpeg': 'jpeg',
   'image/webp': 'webp',
+  'image/svg+xml': 'svg',
 };
 
 // For the file picker; listing MIME types as well helps pickers that ignore extensions.
-export const originalFileAccept = '.psd,.psb,.png,.jpg,.jpeg,.webp,image/png,image/jpeg,image/webp,image/vnd.adobe.photoshop';
+export const originalFileAccept = '.psd,.psb,.png,.jpg,.jpeg,.webp,.svg,image/png,image/jpeg,image/webp,image/svg+xml,image/vnd.adobe.photoshop';
 
 export type FileProblem = { code: 'upload.unsupported_type' | 'upload.too_large' | 'upload.empty'; message: string };
 
@@ -62,7 +64,7 @@ export function checkOriginalFile(file: FileFacts, limitBytes = UPLOAD_LIMIT_BYT
     const what = extension ? `a .${extension} file` : 'a file without a type';
     return {
       code: 'upload.unsupported_type',
-      message: `“${file.name}” is ${what}. Originals can be layered PSD (or PSB) files or flat PNG, JPEG or WebP images.`,
+      message: `“${file.name}” is ${what}. Originals can be layered PSD (or PSB) files, flat PNG, JPEG or WebP images, or SVG drawings.`,
     };
   }
   if (file.size === 0) return { code: 'upload.empty', message: `“${file.name}” is empty (0 bytes).` };

@@ -86,6 +86,21 @@ describe('uploading a layered PSD', () => {
   });
 });
 
+describe('uploading an SVG drawing', () => {
+  it('stores the file unchanged, draws it without its script and names what was left out', async () => {
+    const drawing = '<svg xmlns="http://www.w3.org/2000/svg" width="96" height="96" onload="alert(1)"><script>alert(2)</script><circle cx="48" cy="48" r="40" fill="#1d6f6a"/></svg>';
+    const original = await uploadAndWait(owner, Buffer.from(drawing), 'tide-pool.svg');
+    expect({ status: original.status, error: original.error }).toEqual({ status: 'ready', error: null });
+    expect(original.motifs).toHaveLength(1);
+    // 96 px = 1 in (CSS), drawn at 300 ppi: the circle's 80 px are 250 px
+    expect(original.motifs[0]).toMatchObject({ name: 'tide-pool', kind: 'image', width: 250, height: 250 });
+    const left = original.report.unsupported.map((u: { feature: string }) => u.feature);
+    expect(left).toEqual(expect.arrayContaining(['Left out for safety: 1 script element', 'Left out for safety: 1 event handler (onload)']));
+    const { rows } = await t.runtime.db.pool.query('select storage_key from originals where id = $1', [original.id]);
+    expect((await t.runtime.storage.getBuffer(rows[0].storage_key)).toString('utf8')).toBe(drawing);
+  });
+});
+
 describe('bad uploads', () => {
   it('refuses a file that is not a PSD or image with 415, naming what it is', async () => {
     const res = await owner.upload('/api/originals', Buffer.from('%PDF-1.7\n%âãÏÓ\n1 0 obj\n'), 'card.psd');

@@ -50,10 +50,7 @@ describe('flat image uploads', () => {
     }
   });
 
-  it('refuses SVG, a damaged PNG and an image over the pixel budget', async () => {
-    const svg = join(dir, 'drawing.svg');
-    writeFileSync(svg, '<svg xmlns="http://www.w3.org/2000/svg"><script>alert(1)</script></svg>');
-    expect(await rejection(svg)).toBe('upload.svg_unsupported');
+  it('refuses a damaged PNG and an image over the pixel budget', async () => {
     const broken = join(dir, 'broken.png');
     const png = await sharp({ create: { width: 50, height: 50, channels: 3, background: '#abcdef' } }).png().toBuffer();
     writeFileSync(broken, png.subarray(0, 60));

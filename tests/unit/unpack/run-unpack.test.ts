@@ -65,6 +65,6 @@ describe('unpacking in a child process', () => {
     writeFileSync(pdf, '%PDF-1.7\n1 0 obj\n<<>>\nendobj\n');
     const error = await failure(runUnpack({ filePath: pdf, outDir: dir, cut: 'groups' }));
     expect(error.code).toBe('upload.unsupported_type');
-    expect(error.message).toBe('This file is a PDF document; upload a layered PSD or a PNG, JPEG or WebP image');
+    expect(error.message).toBe('This file is a PDF document; upload a layered PSD, a PNG, JPEG or WebP image, or an SVG drawing');
   }, 30_000);
 });

@@ -81,7 +81,8 @@ function stripXmlProlog(text: string): string {
     const before = rest;
     rest = rest.replace(/^<\?[\s\S]*?\?>/, '').trimStart();
     rest = rest.replace(/^<!--[\s\S]*?-->/, '').trimStart();
-    rest = rest.replace(/^<!doctype\s+svg[^>]*>/i, '').trimStart();
+    // a DOCTYPE may carry an internal subset in brackets, itself holding '>' characters
+    rest = rest.replace(/^<!doctype\s+svg\b[^>[]*(\[[\s\S]*?\])?\s*>/i, '').trimStart();
     if (rest === before) break;
   }
   return rest;

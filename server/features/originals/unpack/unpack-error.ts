@@ -2,7 +2,6 @@
 // message the user can act on.
 export type UnpackErrorCode =
   | 'upload.unsupported_type'
-  | 'upload.svg_unsupported'
   | 'upload.too_large'
   | 'upload.unreadable'
   | 'psd.truncated'
@@ -24,6 +23,9 @@ export type UnpackErrorCode =
   | 'psd.out_of_memory'
   | 'image.corrupt'
   | 'image.too_large'
+  | 'svg.too_large'
+  | 'svg.unsafe'
+  | 'svg.unreadable'
   | 'unpack.crashed';
 
 export type UnpackErrorValue = { code: UnpackErrorCode; message: string };
@@ -47,12 +49,13 @@ export function isUnpackError(value: unknown): value is UnpackError {
 }
 
 export const unpackErrorCodes: readonly UnpackErrorCode[] = [
-  'upload.unsupported_type', 'upload.svg_unsupported', 'upload.too_large', 'upload.unreadable',
+  'upload.unsupported_type', 'upload.too_large', 'upload.unreadable',
   'psd.truncated', 'psd.bad_signature', 'psd.bad_version', 'psd.psb_unsupported',
   'psd.bad_channels', 'psd.bad_dimensions', 'psd.bad_depth', 'psd.unsupported_depth',
   'psd.bad_mode', 'psd.unsupported_mode', 'psd.too_many_layers', 'psd.document_too_large',
   'psd.layer_too_large', 'psd.layers_too_large', 'psd.corrupt', 'psd.timeout',
-  'psd.out_of_memory', 'image.corrupt', 'image.too_large', 'unpack.crashed',
+  'psd.out_of_memory', 'image.corrupt', 'image.too_large', 'svg.too_large', 'svg.unsafe', 'svg.unreadable',
+  'unpack.crashed',
 ];
 
 export function isUnpackErrorCode(value: string): value is UnpackErrorCode {

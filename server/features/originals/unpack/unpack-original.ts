@@ -1,6 +1,7 @@
 import { mkdir, open, readFile, stat } from 'node:fs/promises';
 import { SNIFF_BYTES, sniffFileType } from './sniff-file-type';
 import { unpackFlatImage } from './unpack-flat-image';
+import { unpackSvg } from './unpack-svg';
 import { UnpackError } from './unpack-error';
 import { resolveUnpackLimits, type UnpackLimits } from './unpack-limits';
 import { unpackPsd } from './unpack-psd';
@@ -41,9 +42,9 @@ export async function unpackOriginal(
     case 'webp':
       return unpackFlatImage(await readWhole(input.filePath), ctx);
     case 'svg':
-      throw new UnpackError('upload.svg_unsupported', 'SVG drawings are not supported yet; export the artwork as PNG or PSD and upload that');
+      return unpackSvg(await readWhole(input.filePath), ctx);
     default:
-      throw new UnpackError('upload.unsupported_type', `This file is ${type.label}; upload a layered PSD or a PNG, JPEG or WebP image`);
+      throw new UnpackError('upload.unsupported_type', `This file is ${type.label}; upload a layered PSD, a PNG, JPEG or WebP image, or an SVG drawing`);
   }
 }
 

@@ -12,7 +12,7 @@ export const unpackedMotifSchema = z.object({
   name: z.string(),
   // 'Group/Layer', with '\' and '/' inside names escaped as '\\' and '\/'
   sourcePath: z.string(),
-  // 'image' for a flat PNG, JPEG or WebP upload
+  // 'image' for a flat PNG, JPEG or WebP upload or an SVG drawing
   kind: z.enum(['group', 'layer', 'text', 'image']),
   // hidden in the original; imported anyway
   hidden: z.boolean(),

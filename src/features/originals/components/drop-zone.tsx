@@ -64,7 +64,7 @@ export function DropZone({ onFile, limitBytes, disabled = false }: DropZoneProps
       </svg>
       <p className="text-lg font-semibold text-ink">{dragging ? 'Let go to add this file' : 'Drop an original here'}</p>
       <p id={hintId} className="max-w-md text-ink-soft">
-        A layered PSD, or a flat PNG, JPEG or WebP image
+        A layered PSD, a flat PNG, JPEG or WebP image, or an SVG drawing
         {limitBytes ? `, up to ${formatBytes(limitBytes)}` : ''}. The file is kept exactly as it is.
       </p>
       <input

@@ -1,0 +1,107 @@
+import { execFileSync } from 'node:child_process';
+import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { afterAll, describe, expect, it } from 'vitest';
+import { sanitiseSvg } from '../../../server/features/originals/unpack/sanitise-svg';
+import { UnpackError } from '../../../server/features/originals/unpack/unpack-error';
+import { unpackOriginal } from '../../../server/features/originals/unpack/unpack-original';
+import { readPngRgba } from './support/pixels';
+
+const dir = mkdtempSync(join(tmpdir(), 'unpack-svg-'));
+afterAll(() => rmSync(dir, { recursive: true, force: true }));
+
+function svgFile(name: string, text: string): string {
+  const file = join(dir, name);
+  writeFileSync(file, text);
+  return file;
+}
+
+async function rejection(filePath: string): Promise<string> {
+  try {
+    await unpackOriginal({ filePath, outDir: mkdtempSync(join(dir, 'out-')), cut: 'groups' });
+    return 'ok';
+  } catch (error) {
+    expect(error).toBeInstanceOf(UnpackError);
+    return (error as UnpackError).code;
+  }
+}
+
+// Our own drawing: a sea-green square in the right half of a 1 x 0.5 in (96 x 48 px) sheet.
+const SQUARE = '<svg xmlns="http://www.w3.org/2000/svg" width="96" height="48"><rect x="48" y="0" width="48" height="48" fill="#1d6f6a"/></svg>';
+
+describe('SVG drawings', () => {
+  it('become one motif drawn at 300 ppi, placed and coloured as ImageMagick draws the same file', async () => {
+    const file = svgFile('square.svg', SQUARE);
+    const out = mkdtempSync(join(dir, 'out-'));
+    const result = await unpackOriginal({ filePath: file, outDir: out, cut: 'groups', originalName: 'Harbour square.svg' });
+    // CSS Values and Units: 96 px = 1 in, so at 300 ppi the sheet is 300 x 150 px and the square
+    // starts at x = 150
+    expect(result.document).toMatchObject({ width: 300, height: 150, ppi: 300, colourMode: 'RGB' });
+    expect(result.motifs).toHaveLength(1);
+    expect(result.motifs[0]).toMatchObject({ name: 'Harbour square', left: 150, top: 0, width: 150, height: 150 });
+    expect(result.report.notes[0]).toMatch(/Drawn from the SVG at 300 ppi: the drawing is 1\.00 x 0\.50 in/);
+    const png = await readPngRgba(join(out, result.motifs[0].pngFile));
+    expect(Array.from(png.data.subarray(0, 4))).toEqual([0x1d, 0x6f, 0x6a, 255]);
+    // ImageMagick (Debian's), an independent SVG reader, at the same 300 dpi: the same sheet size,
+    // the square's colour in the right half and none in the left (its own renderer outlines
+    // shapes with a thin dark line, so only the interiors are compared)
+    const im = execFileSync('/usr/bin/convert', ['-density', '300', file, '-depth', '8', 'rgba:-'], { maxBuffer: 16 * 1024 * 1024 });
+    expect(im.length).toBe(300 * 150 * 4);
+    const at = (x: number, y: number) => Array.from(im.subarray((y * 300 + x) * 4, (y * 300 + x) * 4 + 3));
+    expect(at(225, 75)).toEqual([0x1d, 0x6f, 0x6a]);
+    expect(at(75, 75)).not.toEqual([0x1d, 0x6f, 0x6a]);
+  });
+
+  it('leaves out scripts, event handlers, embedded HTML and links outside the drawing, and names them in the report', async () => {
+    const hostile = `<?xml version="1.0"?>
+<svg xmlns="http://www.w3.org/2000/svg" xmlns:xlink="http://www.w3.org/1999/xlink" width="96" height="96" onload="alert(1)">
+  <script>alert(2)</script>
+  <defs><circle id="dot" cx="48" cy="48" r="40" fill="#c0392b"/></defs>
+  <use xlink:href="#dot" onclick="steal()"/>
+  <image href="file:///etc/passwd" width="10" height="10"/>
+  <image xlink:href="http://collector.invalid/pixel.png" width="10" height="10"/>
+  <foreignObject width="50" height="50"><div xmlns="http://www.w3.org/1999/xhtml">&lt;b&gt;hi</div></foreignObject>
+  <style>@import url(http://collector.invalid/a.css);</style>
+</svg>`;
+    const clean = await sanitiseSvg(hostile);
+    expect(clean.svg).not.toMatch(/script|onload|onclick|foreignObject|passwd|collector|@import/i);
+    // a reference inside the drawing is kept
+    expect(clean.svg).toMatch(/href="#dot"/);
+    const out = mkdtempSync(join(dir, 'out-'));
+    const result = await unpackOriginal({ filePath: svgFile('hostile.svg', hostile), outDir: out, cut: 'groups', originalName: 'Lantern <walk> & "kite".svg' });
+    const left = result.report.unsupported.map((u) => u.feature);
+    expect(left).toEqual(expect.arrayContaining([
+      'Left out for safety: 1 script element',
+      'Left out for safety: 1 foreignObject element',
+      'Left out for safety: 2 event handlers (onload, onclick)',
+      'Left out for safety: 2 links outside the drawing',
+      'Left out for safety: 1 style sheet that loads from outside',
+    ]));
+    // the red dot is drawn through <use>, centred on the 300 x 300 px sheet
+    expect(result.motifs).toHaveLength(1);
+    // markup in a name is kept as text (the client shows it escaped)
+    expect(result.motifs[0].name).toBe('Lantern <walk> & "kite"');
+    const png = await readPngRgba(join(out, result.motifs[0].pngFile));
+    const mid = ((png.height >> 1) * png.width + (png.width >> 1)) * 4;
+    expect(Array.from(png.data.subarray(mid, mid + 4))).toEqual([0xc0, 0x39, 0x2b, 255]);
+  });
+
+  it('refuses entity declarations, files that are not one drawing, and drawings too large to draw', async () => {
+    const laughs = '<?xml version="1.0"?><!DOCTYPE svg [<!ENTITY a "aaaaaaaaaa"><!ENTITY b "&a;&a;&a;&a;&a;&a;&a;&a;">]><svg xmlns="http://www.w3.org/2000/svg" width="10" height="10"><text>&b;</text></svg>';
+    expect(await rejection(svgFile('laughs.svg', laughs))).toBe('svg.unsafe');
+    expect(await rejection(svgFile('broken.svg', '<svg xmlns="http://www.w3.org/2000/svg" width="0" height="0"'))).toBe('svg.unreadable');
+    // 2,000,000 px a side at 96 px/in is 20,833 in: past any pixel limit even at 1 ppi
+    const huge = svgFile('huge.svg', '<svg xmlns="http://www.w3.org/2000/svg" width="2000000" height="2000000"><rect width="10" height="10"/></svg>');
+    await expect(unpackOriginal({ filePath: huge, outDir: mkdtempSync(join(dir, 'out-')), cut: 'groups', limits: { maxDocumentPixels: 1_000_000 } })).rejects.toMatchObject({ code: 'image.too_large' });
+  });
+
+  it('draws a large drawing at the resolution that fits the pixel limit, and says so', async () => {
+    // 20 x 10 in at 96 px/in; 300 ppi would be 6000 x 3000 px
+    const file = svgFile('banner.svg', '<svg xmlns="http://www.w3.org/2000/svg" width="1920" height="960"><rect width="1920" height="960" fill="#f6f1e8"/></svg>');
+    const result = await unpackOriginal({ filePath: file, outDir: mkdtempSync(join(dir, 'out-')), cut: 'groups', limits: { maxDocumentPixels: 2_000_000 } });
+    expect(result.document.width * result.document.height).toBeLessThanOrEqual(2_000_000);
+    expect(result.document.ppi).toBeLessThan(300);
+    expect(result.report.notes.some((n) => /not 300, to stay within/.test(n))).toBe(true);
+  });
+});
