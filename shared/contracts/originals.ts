@@ -54,7 +54,7 @@ export type MotifSummary = z.infer<typeof motifSummarySchema>;
 export const originalSummarySchema = z.object({
   id: z.string(),
   name: z.string(),
-  fileKind: z.enum(['psd', 'png', 'jpeg', 'webp']),
+  fileKind: z.enum(['psd', 'png', 'jpeg', 'webp', 'svg']),
   byteSize: z.number(),
   status: originalStatusSchema,
   phase: importPhaseSchema,

@@ -22,7 +22,7 @@ const json = z.unknown();
 export const studioDataOriginalSchema = z.looseObject({
   id,
   name: z.string(),
-  fileKind: z.enum(['psd', 'png', 'jpeg', 'webp']),
+  fileKind: z.enum(['psd', 'png', 'jpeg', 'webp', 'svg']),
   byteSize: z.number().int().nonnegative(),
   fileSha256: z.string(),
   storageKey,

@@ -22,7 +22,7 @@ export const originals = pgTable(
     id: uuid('id').primaryKey().defaultRandom(),
     studioId: uuid('studio_id').notNull().references(() => studios.id, { onDelete: 'cascade' }),
     name: text('name').notNull(),
-    fileKind: text('file_kind').$type<'psd' | 'png' | 'jpeg' | 'webp'>().notNull(),
+    fileKind: text('file_kind').$type<'psd' | 'png' | 'jpeg' | 'webp' | 'svg'>().notNull(),
     byteSize: bigint('byte_size', { mode: 'number' }).notNull(),
     fileSha256: text('file_sha256').notNull(),
     storageKey: text('storage_key').notNull(),

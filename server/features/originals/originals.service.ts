@@ -128,7 +128,7 @@ export function createOriginalsService({ repo, storage, queue, cleanup, earlyUnp
           id,
           studioId: input.studioId,
           name: cleanFileName(input.fileName),
-          fileKind: sniffed.kind === 'psb' ? 'psd' : (sniffed.kind as 'psd' | 'png' | 'jpeg' | 'webp'),
+          fileKind: sniffed.kind === 'psb' ? 'psd' : (sniffed.kind as 'psd' | 'png' | 'jpeg' | 'webp' | 'svg'),
           byteSize: input.byteSize,
           fileSha256,
           storageKey: key,

@@ -31,4 +31,5 @@ export const fileKindWords: Record<OriginalSummary['fileKind'], string> = {
   png: 'PNG image',
   jpeg: 'JPEG image',
   webp: 'WebP image',
+  svg: 'SVG drawing',
 };

@@ -1,4 +1,5 @@
 import sharp from 'sharp';
+import { originalDetailSchema, originalsListSchema } from '../../../shared/contracts/originals';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { addMember, createTestApp, signUpOwner, type ApiClient, type TestApp } from '../support/test-app';
 import { psdHeader, smallCardPsd } from '../support/psd-files';
@@ -91,6 +92,9 @@ describe('uploading an SVG drawing', () => {
     const drawing = '<svg xmlns="http://www.w3.org/2000/svg" width="96" height="96" onload="alert(1)"><script>alert(2)</script><circle cx="48" cy="48" r="40" fill="#1d6f6a"/></svg>';
     const original = await uploadAndWait(owner, Buffer.from(drawing), 'tide-pool.svg');
     expect({ status: original.status, error: original.error }).toEqual({ status: 'ready', error: null });
+    // the answers read as the client reads them
+    expect(originalDetailSchema.parse(original).fileKind).toBe('svg');
+    expect(originalsListSchema.parse((await owner.get('/api/originals').expect(200)).body).originals.some((o) => o.id === original.id && o.fileKind === 'svg')).toBe(true);
     expect(original.motifs).toHaveLength(1);
     // 96 px = 1 in (CSS), drawn at 300 ppi: the circle's 80 px are 250 px
     expect(original.motifs[0]).toMatchObject({ name: 'tide-pool', kind: 'image', width: 250, height: 250 });
