@@ -82,6 +82,9 @@ describe('SVG drawings', () => {
     expect(result.motifs).toHaveLength(1);
     // markup in a name is kept as text (the client shows it escaped)
     expect(result.motifs[0].name).toBe('Lantern <walk> & "kite"');
+    expect(result.report.notes.some((n) => /live text/.test(n))).toBe(false);
+    const withText = await unpackOriginal({ filePath: svgFile('sign.svg', '<svg xmlns="http://www.w3.org/2000/svg" width="96" height="48"><text x="4" y="30">Tide</text></svg>'), outDir: mkdtempSync(join(dir, 'out-')), cut: 'groups' });
+    expect(withText.report.notes.some((n) => /live text, drawn with the fonts this server has/.test(n))).toBe(true);
     const png = await readPngRgba(join(out, result.motifs[0].pngFile));
     const mid = ((png.height >> 1) * png.width + (png.width >> 1)) * 4;
     expect(Array.from(png.data.subarray(mid, mid + 4))).toEqual([0xc0, 0x39, 0x2b, 255]);
