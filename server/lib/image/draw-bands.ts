@@ -28,6 +28,11 @@ export function drawBands(canvas: RgbaImage, layers: DrawLayer[], part = 0, part
   for (let band = part; band < bandCount(canvas.height); band += parts) drawOneBand(canvas, layers, band);
 }
 
+/** Draws every layer, in plan order, into each of the given bands. */
+export function drawBandList(canvas: RgbaImage, layers: DrawLayer[], bands: readonly number[]): void {
+  for (const band of bands) drawOneBand(canvas, layers, band);
+}
+
 /** The rows [top, bottom) of a band of the canvas. */
 export function bandRows(height: number, band: number): { top: number; bottom: number } {
   const top = band * BAND_ROWS;

@@ -3,11 +3,11 @@
 // saying as each of its bands is final, then says the render is done.
 // Imports only the pure drawing code, never sharp.
 import { parentPort } from 'node:worker_threads';
-import { bandCount, drawBands, drawOneBand, type DrawLayer } from './draw-bands';
+import { drawBandList, drawOneBand, type DrawLayer } from './draw-bands';
 import type { RgbaImage } from './rgba-image';
 
 export type DrawRequest =
-  | { kind: 'begin'; id: number; canvas: RgbaImage; part: number; parts: number }
+  | { kind: 'begin'; id: number; canvas: RgbaImage; bands: number[] }
   | { kind: 'layer'; id: number; layer: DrawLayer }
   | { kind: 'end'; id: number; tail: DrawLayer[] };
 export type DrawReply =
@@ -16,14 +16,14 @@ export type DrawReply =
   // band `band` of the render is final (only sent while the render has not failed)
   | { id: number; band: number };
 
-type Render = { canvas: RgbaImage; part: number; parts: number; error: string | null };
+type Render = { canvas: RgbaImage; bands: number[]; error: string | null };
 const renders = new Map<number, Render>();
 
 const messageOf = (error: unknown) => (error instanceof Error ? error.message : String(error));
 
 parentPort?.on('message', (request: DrawRequest) => {
   if (request.kind === 'begin') {
-    renders.set(request.id, { canvas: request.canvas, part: request.part, parts: request.parts, error: null });
+    renders.set(request.id, { canvas: request.canvas, bands: request.bands, error: null });
     return;
   }
   const render = renders.get(request.id);
@@ -31,7 +31,7 @@ parentPort?.on('message', (request: DrawRequest) => {
   if (request.kind === 'layer') {
     if (render.error !== null) return;
     try {
-      drawBands(render.canvas, [request.layer], render.part, render.parts);
+      drawBandList(render.canvas, [request.layer], render.bands);
     } catch (error) {
       render.error = messageOf(error);
     }
@@ -40,7 +40,7 @@ parentPort?.on('message', (request: DrawRequest) => {
   renders.delete(request.id);
   if (render.error === null) {
     try {
-      for (let band = render.part; band < bandCount(render.canvas.height); band += render.parts) {
+      for (const band of render.bands) {
         drawOneBand(render.canvas, request.tail, band);
         parentPort!.postMessage({ id: request.id, band } satisfies DrawReply);
       }

@@ -43,7 +43,7 @@ describe('print drawing shared with draw threads', () => {
     for (const op of plan.ops as MotifDrawOp[]) layers.push({ kind: 'motif', motif: await prepareMotif(motif, op), clip: op.clip!, composite: { blendMode: op.blendMode, opacity: op.opacity } });
     drawBands(expected, layers);
     expect(Buffer.compare(Buffer.from(image.data), Buffer.from(expected.data))).toBe(0);
-    // the draw thread's bands (odd ones, rows 64-127, ...) were really drawn
+    // the draw thread's bands (two in three: rows 64-191, ...) were really drawn
     expect(image.data.subarray(100 * 1600 * 4, 101 * 1600 * 4).some((v) => v > 0)).toBe(true);
   });
 
