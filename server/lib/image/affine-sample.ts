@@ -74,7 +74,8 @@ export function sampleRows(source: SourcePixels, matrix: Affine, box: PixelBoxLi
     out.fill(0, t0 * 4, t1 * 4);
     for (let x = t0; x < t1; x++) {
       if (x === f0 && f1 > f0) {
-        if (src32) interiorRunWords(src32, sw, out, out32, u0, v0, ia, ib, f0, f1);
+        // the row is zeroed, so this writes each sample as it is (straight RGBA)
+        if (src32) interiorRunOnto(src32, sw, out, out32, null, 0, u0, v0, ia, ib, f0, f1);
         else interiorRun(src, sw, out, out32, u0, v0, ia, ib, f0, f1);
         x = f1 - 1;
         continue;
@@ -152,60 +153,13 @@ function interiorRun(src: Uint8Array | Uint8ClampedArray, sw: number, out: Uint8
 }
 
 /**
- * interiorRun reading each tap as one little-endian word (R in the low byte, alpha in the top
- * one): a quarter of the loads, the same arithmetic in the same order, so the same bytes.
- */
-function interiorRunWords(src: Uint32Array, sw: number, out: Uint8Array, out32: Uint32Array, u0: number, v0: number, ia: number, ib: number, from: number, to: number): void {
-  for (let x = from; x < to; x++) {
-    const u = u0 + ia * x;
-    const v = v0 + ib * x;
-    const x0 = u | 0;
-    const y0 = v | 0;
-    const fx = u - x0;
-    const fy = v - y0;
-    const j00 = y0 * sw + x0;
-    const p00 = src[j00];
-    const p01 = src[j00 + 1];
-    const p10 = src[j00 + sw];
-    const p11 = src[j00 + sw + 1];
-    const a00 = p00 >>> 24;
-    const a01 = p01 >>> 24;
-    const a10 = p10 >>> 24;
-    const a11 = p11 >>> 24;
-    if ((a00 | a01 | a10 | a11) === 0) continue;
-    if ((a00 & a01 & a10 & a11) === 255) {
-      const g00 = (1 - fx) * (1 - fy);
-      const g01 = fx * (1 - fy);
-      const g10 = (1 - fx) * fy;
-      const g11 = fx * fy;
-      const r = (g00 * (p00 & 255) + g01 * (p01 & 255) + g10 * (p10 & 255) + g11 * (p11 & 255) + 0.5) | 0;
-      const g = (g00 * ((p00 >>> 8) & 255) + g01 * ((p01 >>> 8) & 255) + g10 * ((p10 >>> 8) & 255) + g11 * ((p11 >>> 8) & 255) + 0.5) | 0;
-      const b = (g00 * ((p00 >>> 16) & 255) + g01 * ((p01 >>> 16) & 255) + g10 * ((p10 >>> 16) & 255) + g11 * ((p11 >>> 16) & 255) + 0.5) | 0;
-      out32[x] = (r | (g << 8) | (b << 16) | 0xff000000) >>> 0;
-      continue;
-    }
-    const w00 = (1 - fx) * (1 - fy) * a00;
-    const w01 = fx * (1 - fy) * a01;
-    const w10 = (1 - fx) * fy * a10;
-    const w11 = fx * fy * a11;
-    const al = w00 + w01 + w10 + w11;
-    if (al <= 0) continue;
-    const inv = 1 / al;
-    const o = x * 4;
-    out[o] = (w00 * (p00 & 255) + w01 * (p01 & 255) + w10 * (p10 & 255) + w11 * (p11 & 255)) * inv + 0.5;
-    out[o + 1] = (w00 * ((p00 >>> 8) & 255) + w01 * ((p01 >>> 8) & 255) + w10 * ((p10 >>> 8) & 255) + w11 * ((p11 >>> 8) & 255)) * inv + 0.5;
-    out[o + 2] = (w00 * ((p00 >>> 16) & 255) + w01 * ((p01 >>> 16) & 255) + w10 * ((p10 >>> 16) & 255) + w11 * ((p11 >>> 16) & 255)) * inv + 0.5;
-    out[o + 3] = al + 0.5;
-  }
-}
-
-/**
- * interiorRunWords drawn straight onto the canvas: each sample is computed with the same
- * arithmetic, then composited as compositeOnto would composite the sampled row, so the bytes are
- * identical. Normal at full opacity (blend null): an opaque sample, or one over a transparent
- * canvas pixel, replaces the canvas word and a partly transparent one goes through overPartly,
- * as in compositeNormalOpaque; any other blend or opacity goes through blendPixel. `base` is the
- * canvas word index of the box's first column in this row.
+ * The four taps read as little-endian words (R in the low byte, alpha in the top one: a quarter
+ * of interiorRun's loads, the same arithmetic in the same order), each sample composited as
+ * compositeOnto would composite the sampled row, so the bytes are identical. Normal at full
+ * opacity (blend null): an opaque sample, or one over a transparent pixel, replaces the word and
+ * a partly transparent one goes through overPartly, as in compositeNormalOpaque; any other blend
+ * or opacity goes through blendPixel. `dst` is the canvas, or a zeroed row buffer (the samples
+ * then land as they are); `base` is the word index of the box's first column in this row.
  */
 function interiorRunOnto(src: Uint32Array, sw: number, dst: Uint8Array, dst32: Uint32Array, blend: PixelBlend | null, base: number, u0: number, v0: number, ia: number, ib: number, from: number, to: number): void {
   for (let x = from; x < to; x++) {

@@ -25,6 +25,15 @@ function bigPlan(): { plan: RenderPlan; motif: { data: Uint8Array; width: number
   return { plan: { size: { width: 1600, height: 800 }, notes: [], ops }, motif };
 }
 
+/** The plan's layers, prepared, and the canvas they make drawn band by band on this thread alone. */
+async function onOneThread(plan: RenderPlan, motif: { data: Uint8Array; width: number; height: number }) {
+  const layers: DrawLayer[] = [];
+  for (const op of plan.ops as MotifDrawOp[]) layers.push({ kind: 'motif', motif: await prepareMotif(motif, op), clip: op.clip!, composite: { blendMode: op.blendMode, opacity: op.opacity } });
+  const expected = { data: new Uint8Array(plan.size.width * plan.size.height * 4), width: plan.size.width, height: plan.size.height, left: 0, top: 0 };
+  drawBands(expected, layers);
+  return { layers, expected };
+}
+
 describe('print drawing shared with draw threads', () => {
   beforeAll(async () => {
     setDrawThreads(1);
@@ -38,10 +47,7 @@ describe('print drawing shared with draw threads', () => {
     expect(image.data.buffer).toBeInstanceOf(SharedArrayBuffer);
     // the PNG compressed band by band as this thread and the draw thread finished them (pngjs reads it)
     expect(Buffer.compare(PNG.sync.read(encoded!.buffer).data, Buffer.from(image.data))).toBe(0);
-    const expected = { data: new Uint8Array(1600 * 800 * 4), width: 1600, height: 800, left: 0, top: 0 };
-    const layers: DrawLayer[] = [];
-    for (const op of plan.ops as MotifDrawOp[]) layers.push({ kind: 'motif', motif: await prepareMotif(motif, op), clip: op.clip!, composite: { blendMode: op.blendMode, opacity: op.opacity } });
-    drawBands(expected, layers);
+    const { expected } = await onOneThread(plan, motif);
     expect(Buffer.compare(Buffer.from(image.data), Buffer.from(expected.data))).toBe(0);
     // the draw thread's bands (two in three: rows 64-191, ...) were really drawn
     expect(image.data.subarray(100 * 1600 * 4, 101 * 1600 * 4).some((v) => v > 0)).toBe(true);
@@ -49,10 +55,7 @@ describe('print drawing shared with draw threads', () => {
 
   it('redraws here the bands of a draw thread that dies mid-render, losing no pixels', async () => {
     const { plan, motif } = bigPlan();
-    const layers: DrawLayer[] = [];
-    for (const op of plan.ops as MotifDrawOp[]) layers.push({ kind: 'motif', motif: await prepareMotif(motif, op), clip: op.clip!, composite: { blendMode: op.blendMode, opacity: op.opacity } });
-    const expected = { data: new Uint8Array(1600 * 800 * 4), width: 1600, height: 800, left: 0, top: 0 };
-    drawBands(expected, layers);
+    const { layers, expected } = await onOneThread(plan, motif);
 
     const canvas = printCanvas(1600, 800);
     const drawing = startDrawing(canvas);
@@ -70,10 +73,7 @@ describe('print drawing shared with draw threads', () => {
 
   it('draws layers that were ready early layer by layer and the rest band by band, to the same pixels', async () => {
     const { plan, motif } = bigPlan();
-    const layers: DrawLayer[] = [];
-    for (const op of plan.ops as MotifDrawOp[]) layers.push({ kind: 'motif', motif: await prepareMotif(motif, op), clip: op.clip!, composite: { blendMode: op.blendMode, opacity: op.opacity } });
-    const expected = { data: new Uint8Array(1600 * 800 * 4), width: 1600, height: 800, left: 0, top: 0 };
-    drawBands(expected, layers);
+    const { layers, expected } = await onOneThread(plan, motif);
     const canvas = printCanvas(1600, 800);
     const drawing = startDrawing(canvas);
     layers.slice(0, 2).forEach((l) => drawing.add(l));
