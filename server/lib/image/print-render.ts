@@ -36,8 +36,8 @@ export type PrintRenderNote = { placementId: string; code: 'render.text_skipped'
 
 export type PrintRender = { image: RgbaImage; notes: PrintRenderNote[]; encoded?: EncodedPrintFile };
 
-// The share of onProgress reached once every op is drawn on this thread; the draw threads' last
-// bands have the rest.
+// The share of onProgress reached once every op's pixels are ready (and the early ones drawn);
+// the last layers' bands and the file's last compressed bands have the rest.
 const DRAWN_SHARE = 0.95;
 
 // Sources fetched, decoded and pre-reduced ahead of the op being drawn, so storage, decoding and
