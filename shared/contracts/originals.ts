@@ -8,6 +8,8 @@ export const importReportSchema = z.object({
   skipped: z.array(z.object({ sourcePath: z.string(), reason: z.string() })),
   unsupported: z.array(z.object({ sourcePath: z.string(), feature: z.string() })),
   notes: z.array(z.string()),
+  /** Parts of an SVG drawing removed before it was drawn because they could run or reach outside the file. */
+  leftOut: z.array(z.string()).default([]),
   linkedExisting: z.array(z.object({ sourcePath: z.string(), motifId: z.string(), motifName: z.string() })),
   newVersions: z.array(z.object({ sourcePath: z.string(), motifId: z.string(), version: z.number() })),
   unchanged: z.array(z.object({ sourcePath: z.string(), motifId: z.string() })),

@@ -9,6 +9,8 @@ export type ImportReport = {
   skipped: { sourcePath: string; reason: string }[];
   unsupported: { sourcePath: string; feature: string }[];
   notes: string[];
+  /** Parts of an SVG removed before drawing (scripts, outside links, …); absent on older rows. */
+  leftOut?: string[];
   linkedExisting: { sourcePath: string; motifId: string; motifName: string }[];
   newVersions: { sourcePath: string; motifId: string; version: number }[];
   unchanged: { sourcePath: string; motifId: string }[];

@@ -75,7 +75,8 @@ export function createOriginalsService({ repo, storage, queue, cleanup, earlyUnp
     const rows = await repo.motifsOf(id);
     return {
       ...toOriginalSummary(row, rows.length),
-      report: row.report ?? null,
+      // rows imported before SVG drawings were taken have no leftOut list
+      report: row.report ? { ...row.report, leftOut: row.report.leftOut ?? [] } : null,
       // The path inside this file: a motif linked from several files keeps one name but many places.
       motifs: rows.map((r) => ({ ...toMotifSummary(r.motif, r.version), sourcePath: r.link.sourcePath, linkedExisting: r.link.linkedExisting })),
     };

@@ -50,6 +50,8 @@ export const unpackResultSchema = z.object({
     skipped: z.array(z.object({ sourcePath: z.string(), reason: z.string() })),
     unsupported: z.array(z.object({ sourcePath: z.string(), feature: z.string() })),
     notes: z.array(z.string()),
+    // parts of an SVG removed before drawing because they could run or reach outside the file
+    leftOut: z.array(z.string()).optional(),
   }),
   timings: z.object({ parseMs: z.number(), cutMs: z.number(), encodeMs: z.number() }),
   // filled in by runUnpack from the child process

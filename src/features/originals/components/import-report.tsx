@@ -105,7 +105,22 @@ export function ImportReport({ report }: { report: ImportReportDto }) {
       </ReportSection>,
     );
   }
-  if (report.skipped.length === 0 && report.unsupported.length === 0) {
+  if (report.leftOut.length > 0) {
+    sections.push(
+      <ReportSection
+        key="left-out"
+        title="Left out for safety"
+        explain="Parts of the drawing that could run code or fetch files from elsewhere were removed before it was drawn. The stored file is unchanged."
+      >
+        <ul className="list-disc pl-5 text-ink">
+          {report.leftOut.map((what, i) => (
+            <li key={i}>{what}</li>
+          ))}
+        </ul>
+      </ReportSection>,
+    );
+  }
+  if (report.skipped.length === 0 && report.unsupported.length === 0 && report.leftOut.length === 0) {
     sections.push(
       <ReportSection key="complete" title="Nothing left out" explain="Every layer with pixels became part of a motif, and everything in the file could be drawn." />,
     );

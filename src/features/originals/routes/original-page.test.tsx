@@ -31,6 +31,7 @@ const base: OriginalDetail = {
     skipped: [{ sourcePath: 'Picnic/Empty layer', reason: 'it has no pixels' }],
     unsupported: [{ sourcePath: 'Title', feature: 'drop shadow (a layer effect)' }],
     notes: [],
+    leftOut: [],
     linkedExisting: [],
     newVersions: [],
     unchanged: [],
@@ -95,6 +96,18 @@ describe('original page', () => {
     expect(screen.getByText('<img src=x onerror=alert(1)> Puffin')).toBeTruthy();
     expect(document.querySelector('img[src="x"]')).toBeNull();
     expect(screen.getByText('Hidden in the original')).toBeTruthy();
+  });
+
+  it('lists what was left out of an SVG drawing for safety in its own section', async () => {
+    fakeApi(routeFor({ ...base, fileKind: 'svg', name: 'lantern-sign.svg', report: { ...base.report!, skipped: [], unsupported: [], leftOut: ['1 script element', '2 links outside the drawing'] } }));
+    open('owner');
+    await screen.findByRole('heading', { name: 'lantern-sign.svg' });
+    expect(screen.getByText('SVG drawing')).toBeTruthy();
+    expect(screen.getByRole('heading', { name: 'Left out for safety' })).toBeTruthy();
+    expect(screen.getByText('1 script element')).toBeTruthy();
+    expect(screen.getByText('2 links outside the drawing')).toBeTruthy();
+    expect(screen.queryByText('Nothing left out')).toBeNull();
+    expect(screen.queryByText('Not drawn in the motifs')).toBeNull();
   });
 
   it('gives an owner re-cut, new version and delete; a reviewer none of them', async () => {
