@@ -19,8 +19,13 @@ function Fact({ term, children }: { term: string; children: ReactNode }) {
   );
 }
 
+/** A layered PSD (or PSB): flat images and SVG drawings are one motif, whatever the cut. */
+export const isLayered = (original: Pick<OriginalSummary, 'fileKind'>) => original.fileKind === 'psd';
+
 export function OriginalFacts({ original, previousName }: { original: OriginalSummary; previousName?: string }) {
   const print = original.width && original.height ? largestPrintSize(original.width, original.height, PRINT_PPI) : null;
+  // layers and the way they were cut mean something only for a layered file
+  const layered = isLayered(original);
   return (
     <dl className="grid grid-cols-2 gap-x-6 gap-y-4 sm:grid-cols-3 lg:grid-cols-6">
       <Fact term="Status">
@@ -29,9 +34,9 @@ export function OriginalFacts({ original, previousName }: { original: OriginalSu
       <Fact term="Kind">{fileKindWords[original.fileKind]}</Fact>
       <Fact term="Pixels">{original.width && original.height ? `${original.width} × ${original.height} px` : 'Not read yet'}</Fact>
       <Fact term={`At ${PRINT_PPI} PPI`}>{print ? `${print.widthIn} × ${print.heightIn} in` : '–'}</Fact>
-      <Fact term="Layers">{original.layerCount ?? '–'}</Fact>
+      {layered && <Fact term="Layers">{original.layerCount ?? '–'}</Fact>}
       <Fact term="File size">{formatBytes(original.byteSize)}</Fact>
-      <Fact term="Cut">{cutWords[original.cut].label}</Fact>
+      {layered && <Fact term="Cut">{cutWords[original.cut].label}</Fact>}
       <Fact term="Motifs">{original.motifCount}</Fact>
       <Fact term="Uploaded">{formatDay(original.createdAt)}</Fact>
       {original.previousOriginalId && (

@@ -108,6 +108,11 @@ describe('original page', () => {
     expect(screen.getByText('2 links outside the drawing')).toBeTruthy();
     expect(screen.queryByText('Nothing left out')).toBeNull();
     expect(screen.queryByText('Not drawn in the motifs')).toBeNull();
+    // a drawing is one motif: no layers, no cut, nothing to cut again
+    expect(screen.queryByText('Layers')).toBeNull();
+    expect(screen.queryByText('Cut')).toBeNull();
+    expect(screen.queryByRole('button', { name: 'Cut again…' })).toBeNull();
+    expect(screen.getByRole('link', { name: 'Upload a new version' })).toBeTruthy();
   });
 
   it('gives an owner re-cut, new version and delete; a reviewer none of them', async () => {

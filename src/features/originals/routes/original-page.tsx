@@ -13,7 +13,7 @@ import { useOriginals } from '../api/get-originals';
 import { DeleteOriginalDialog } from '../components/delete-original-dialog';
 import { ImportProgress } from '../components/import-progress';
 import { ImportReport } from '../components/import-report';
-import { OriginalFacts } from '../components/original-facts';
+import { isLayered, OriginalFacts } from '../components/original-facts';
 import { OriginalMotifs } from '../components/original-motifs';
 import { RecutDialog } from '../components/recut-dialog';
 
@@ -64,9 +64,11 @@ export function OriginalPage() {
             <div className="flex flex-wrap gap-2">
               {ready && (
                 <>
-                  <Button variant="secondary" onClick={() => setRecutting(true)}>
-                    Cut again…
-                  </Button>
+                  {isLayered(data) && (
+                    <Button variant="secondary" onClick={() => setRecutting(true)}>
+                      Cut again…
+                    </Button>
+                  )}
                   <ButtonLink variant="secondary" to={`/originals?versionOf=${data.id}`}>
                     Upload a new version
                   </ButtonLink>
