@@ -23,14 +23,22 @@ const DEFLATE = { level: 6, memLevel: 9, strategy: constants.Z_DEFAULT_STRATEGY,
 
 // Buffers for the filtered rows, reused band after band and render after render: on this kind
 // of host the first write to fresh memory costs several times the copy itself.
-const SPARE_KEEP = 32;
+// At most this much is kept: about a print file's worth of bands.
+const SPARE_KEEP_BYTES = 32 * 1024 * 1024;
 const spare: Buffer[] = [];
+let spareBytes = 0;
 function filteredBuffer(bytes: number): Buffer {
   const at = spare.findIndex((b) => b.length >= bytes);
-  return at >= 0 ? spare.splice(at, 1)[0].subarray(0, bytes) : Buffer.allocUnsafeSlow(bytes);
+  if (at < 0) return Buffer.allocUnsafeSlow(bytes);
+  const [whole] = spare.splice(at, 1);
+  spareBytes -= whole.length;
+  return whole.subarray(0, bytes);
 }
 function giveBack(buffer: Buffer): void {
-  if (spare.length < SPARE_KEEP) spare.push(Buffer.from(buffer.buffer, buffer.byteOffset, buffer.buffer.byteLength - buffer.byteOffset));
+  const whole = Buffer.from(buffer.buffer, buffer.byteOffset, buffer.buffer.byteLength - buffer.byteOffset);
+  if (spareBytes + whole.length > SPARE_KEEP_BYTES) return;
+  spare.push(whole);
+  spareBytes += whole.length;
 }
 
 const deflateBand = promisify(deflateRaw);
