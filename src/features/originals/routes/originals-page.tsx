@@ -29,8 +29,8 @@ export function OriginalsPage() {
         title="Originals"
         description={
           canImport
-            ? 'Layered PSD files and flat images, kept exactly as uploaded. Each one is cut into motifs for the library.'
-            : 'Layered PSD files and flat images, kept exactly as uploaded. Editors and owners upload them.'
+            ? 'Layered PSD files, flat images and SVG drawings, kept exactly as uploaded. Each one is cut into motifs for the library.'
+            : 'Layered PSD files, flat images and SVG drawings, kept exactly as uploaded. Editors and owners upload them.'
         }
       />
       <div className="flex flex-col gap-6">
