@@ -24,15 +24,14 @@ export function textSizeRule(ctx: PreflightContext): Finding[] {
 function backdropsOf(ctx: PreflightContext): { body: string; variant: string | null }[] {
   const { template, variantId } = ctx.input;
   if (variantId) return [{ body: blankColoursOf(template, variantId).body, variant: null }];
-  const all = [{ body: template.blank.body, variant: null as string | null }];
-  for (const v of template.variants) {
+  const candidates = [
     // on a cold heat-changing blank the coating hides the print, text and all
-    if (v.hidesPrint) continue;
-    const body = blankColoursOf(template, v.id).body;
-    if (!all.some((b) => b.body.toLowerCase() === body.toLowerCase())) all.push({ body, variant: v.name });
-  }
-  for (const b of ctx.input.productBlanks ?? []) {
-    if (!all.some((a) => a.body.toLowerCase() === b.body.toLowerCase())) all.push({ body: b.body, variant: b.name });
+    ...template.variants.filter((v) => !v.hidesPrint).map((v) => ({ body: blankColoursOf(template, v.id).body, variant: v.name })),
+    ...(ctx.input.productBlanks ?? []).map((b) => ({ body: b.body, variant: b.name })),
+  ];
+  const all = [{ body: template.blank.body, variant: null as string | null }];
+  for (const c of candidates) {
+    if (!all.some((b) => b.body.toLowerCase() === c.body.toLowerCase())) all.push(c);
   }
   return all;
 }

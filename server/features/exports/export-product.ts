@@ -65,7 +65,7 @@ export function createExportRunner(deps: ExportRunnerDeps) {
         const entries: BundleEntry[] = [{ name: printName, data: encoded.buffer }];
         await progress(0.45);
         // Previews per product variant (its blank and handle colours), or per template blank without variants.
-        const variants = await deps.repo.productVariants(row.studioId, row.productId);
+        const { variants } = sources;
         for (const target of previewBlanks(sources.template, variants)) {
           for (const view of previewViewsOf(sources.template)) {
             entries.push({ name: `previews/${target.folder}/${view}.png`, data: await previewOnBlank(render.image, sources.template, view, target.blank, target.templateVariantId) });

@@ -1,7 +1,9 @@
 import { dominantColours } from '../../../shared/colour';
 import { preflightOptionsSchema, runPreflight, type MotifFacts, type PaletteGroup, type PreflightReport, type ProductBlank, type SoftProof } from '../../../shared/preflight';
 import { softProof, SOFT_PROOF_DELTA_E } from '../../lib/image/soft-proof';
+import { printHiddenOn } from '../../../shared/templates';
 import { renderProduct, versionKey, type ProductSources } from './product-sources';
+import { variantBlank } from './variant-print-files';
 
 // Preflight looks at a render this size (longer side): enough for colour shares, fast on 2 cores.
 export const PREFLIGHT_RENDER_SIDE = 1000;
@@ -28,8 +30,12 @@ export async function productPreflight(sources: ProductSources, variantId: strin
   const proof = await softProof(render.image);
   const soft: SoftProof = { shareOverDeltaE5: proof.shareOverDeltaE5, profileName: proof.profileName };
   const options = preflightOptionsSchema.parse(sources.preflightOptions);
-  const report = runPreflight({ scene: sources.scene, template: sources.template, motifs, variantId, paletteGroups: palette, softProof: soft, options, productBlanks: sources.productBlanks });
-  return { report, motifs, palette, softProof: { ...soft, deltaE: SOFT_PROOF_DELTA_E, renderWidth: width, renderHeight: height }, paletteLimit: options.paletteLimit, productBlanks: sources.productBlanks };
+  // the product's own variants' blanks where the print shows, for text contrast
+  const productBlanks = sources.variants
+    .filter((v) => !printHiddenOn(sources.template, v.options.templateVariantId ?? null))
+    .map((v) => ({ name: v.name, body: variantBlank(sources.template, v).body }));
+  const report = runPreflight({ scene: sources.scene, template: sources.template, motifs, variantId, paletteGroups: palette, softProof: soft, options, productBlanks });
+  return { report, motifs, palette, softProof: { ...soft, deltaE: SOFT_PROOF_DELTA_E, renderWidth: width, renderHeight: height }, paletteLimit: options.paletteLimit, productBlanks };
 }
 
 async function motifFacts(sources: ProductSources): Promise<MotifFacts[]> {

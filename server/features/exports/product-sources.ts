@@ -1,14 +1,13 @@
 import { compose, scale } from '../../../shared/geometry';
 import { createScene, renderPlan, type RenderPlan, type Scene } from '../../../shared/scene';
-import type { ProductBlank } from '../../../shared/preflight';
-import { printHiddenOn, type Template } from '../../../shared/templates';
+import type { Template } from '../../../shared/templates';
 import { decodeMotifPng, renderPrintFile, type LoadMotifPixels, type PrintRender } from '../../lib/image/print-render';
 import type { SourcePixels } from '../../lib/image/affine-sample';
 import { drawTextLayer } from '../../lib/image/text-layer';
 import type { ObjectStorage } from '../../lib/storage';
 import type { ProductsService, ProductView } from '../products/products.service';
 import type { ExportsRepository, MotifVersionRecord } from './exports.repository';
-import { variantBlank } from './variant-print-files';
+import type { VariantRecord } from './variant-print-files';
 
 export type ProductSources = {
   product: ProductView;
@@ -19,8 +18,8 @@ export type ProductSources = {
   loadMotif: LoadMotifPixels;
   /** The studio's own preflight settings (its colour-group limit). */
   preflightOptions: { paletteLimit?: number };
-  /** The product's own variants' blanks where the print shows, for text contrast. */
-  productBlanks: ProductBlank[];
+  /** The product's own variants (blank and handle colours, SKUs), in their order. */
+  variants: VariantRecord[];
 };
 
 export type SourceDeps = { products: Pick<ProductsService, 'detail'>; repo: Pick<ExportsRepository, 'motifVersions' | 'paletteLimit' | 'productVariants'>; storage: Pick<ObjectStorage, 'getBuffer'> };
@@ -45,10 +44,7 @@ export async function productSources(deps: SourceDeps, studioId: string, product
     }
     return p;
   };
-  const productBlanks = variants
-    .filter((v) => !printHiddenOn(product.template, v.options.templateVariantId ?? null))
-    .map((v) => ({ name: v.name, body: variantBlank(product.template, v).body }));
-  return { product, template: product.template, scene: createScene(product.layout), versions, loadMotif, preflightOptions: paletteLimit ? { paletteLimit } : {}, productBlanks };
+  return { product, template: product.template, scene: createScene(product.layout), versions, loadMotif, preflightOptions: paletteLimit ? { paletteLimit } : {}, variants };
 }
 
 /** Placements whose motif version is not (or no longer) in the studio's library. */

@@ -9,7 +9,9 @@ import type { RgbaImage } from './rgba-image';
 export type DrawRequest =
   | { kind: 'begin'; id: number; canvas: RgbaImage; bands: number[] }
   | { kind: 'layer'; id: number; layer: DrawLayer }
-  | { kind: 'end'; id: number; tail: DrawLayer[] };
+  | { kind: 'end'; id: number; tail: DrawLayer[] }
+  // the render was given up: forget it
+  | { kind: 'cancel'; id: number };
 export type DrawReply =
   | { id: number; ok: true }
   | { id: number; ok: false; message: string }
@@ -38,6 +40,10 @@ parentPort?.on('message', (request: DrawRequest) => {
     return;
   }
   renders.delete(request.id);
+  if (request.kind === 'cancel') {
+    parentPort!.postMessage({ id: request.id, ok: false, message: 'cancelled' } satisfies DrawReply);
+    return;
+  }
   if (render.error === null) {
     try {
       for (const band of render.bands) {

@@ -85,6 +85,16 @@ describe('print drawing shared with draw threads', () => {
     expect(Buffer.compare(Buffer.from(canvas.data), Buffer.from(expected.data))).toBe(0);
   });
 
+  it('gives a render up when a source fails to load, and draws the next one whole', async () => {
+    const { plan, motif } = bigPlan();
+    let loads = 0;
+    const failing = renderPrintFile(plan, { loadMotif: async () => (++loads === 4 ? Promise.reject(new Error('storage is down')) : motif), encode: mug11oz.output });
+    await expect(failing).rejects.toThrow('storage is down');
+    const { expected } = await onOneThread(plan, motif);
+    const { image } = await renderPrintFile(plan, { loadMotif: async () => motif });
+    expect(Buffer.compare(Buffer.from(image.data), Buffer.from(expected.data))).toBe(0);
+  });
+
   it('never keeps a process alive once its render is done', () => {
     // a thread left referenced made the seed hang after its last line, and with it the test run
     const script = fileURLToPath(new URL('./draw-threads-exit.fixture.ts', import.meta.url));

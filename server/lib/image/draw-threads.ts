@@ -5,6 +5,7 @@ import { Worker } from 'node:worker_threads';
 import { bandCount, bandRows, drawBandList, drawBands, drawOneBand, type DrawLayer } from './draw-bands';
 import type { DrawReply, DrawRequest } from './draw-thread-entry';
 import type { RgbaImage } from './rgba-image';
+import { sharedMemory } from './shared-sources';
 
 // Print files are drawn band by band (draw-bands.ts); on a machine with more than one core the
 // bands are shared between this thread and a few long-lived draw threads, as libvips shares an
@@ -86,6 +87,8 @@ export type CanvasDrawing = {
   add(layer: DrawLayer): void;
   drawQueued(): void;
   finish(onBand?: OnBand): Promise<void>;
+  /** Gives the render up (a source failed to load): the draw threads drop it and its shared copies are freed. */
+  cancel(): void;
 };
 
 /** Rows [top, bottom) of the canvas are final; called top to bottom, once per band. */
@@ -132,6 +135,7 @@ export function startDrawing(canvas: RgbaImage): CanvasDrawing {
           if (listener) await turn();
         }
       },
+      cancel: () => void queued.splice(0),
     };
   }
   const id = nextId++;
@@ -173,6 +177,12 @@ export function startDrawing(canvas: RgbaImage): CanvasDrawing {
           markFinal(band);
         }
       });
+    },
+    cancel() {
+      queued.splice(0);
+      for (const thread of helpers) thread.worker.postMessage({ kind: 'cancel', id } satisfies DrawRequest);
+      // the threads may still be reading the shared copies until they have heard
+      void Promise.allSettled(replies).then(() => memory.release());
     },
   };
 }
@@ -250,51 +260,4 @@ function startThread(): DrawThread {
   // listener refs the worker's port again), and an idle draw thread never keeps a process (the
   // seed, a script, a test run) from exiting.
   return thread;
-}
-
-// Sources are copied into one shared arena kept between renders: on this kind of host the first
-// write to fresh memory costs far more than the copy itself (measured: 40 MB first touched in
-// 120-170 ms, rewritten in 2.5 ms), so reusing the pages keeps the copy cheap. A render that
-// outgrows the arena, or runs while another holds it, gets fresh memory for the rest; the arena
-// then grows, up to ARENA_KEEP_BYTES, for the next one.
-const ARENA_KEEP_BYTES = 256 * 1024 * 1024;
-let arena: SharedArrayBuffer | null = null;
-let arenaBusy = false;
-
-type SourceData = Uint8Array | Uint8ClampedArray;
-
-function sharedMemory(): { share(layer: DrawLayer): DrawLayer; release(): void } {
-  const own = !arenaBusy;
-  if (own) arenaBusy = true;
-  let at = 0;
-  let needed = 0;
-  // a source used by several layers (the same motif placed twice) is copied once
-  const copies = new Map<SourceData, Uint8Array>();
-  const shared = (data: SourceData): Uint8Array => {
-    if (data.buffer instanceof SharedArrayBuffer) return new Uint8Array(data.buffer, data.byteOffset, data.byteLength);
-    let copy = copies.get(data);
-    if (copy) return copy;
-    const bytes = Math.ceil(data.byteLength / 16) * 16;
-    needed += bytes;
-    if (own && arena && at + bytes <= arena.byteLength) {
-      copy = new Uint8Array(arena, at, data.byteLength);
-      at += bytes;
-    } else {
-      copy = new Uint8Array(new SharedArrayBuffer(data.byteLength));
-    }
-    copy.set(data);
-    copies.set(data, copy);
-    return copy;
-  };
-  return {
-    share: (layer) =>
-      layer.kind === 'motif'
-        ? { ...layer, motif: { ...layer.motif, pixels: { ...layer.motif.pixels, data: shared(layer.motif.pixels.data) } } }
-        : { ...layer, image: { ...layer.image, data: shared(layer.image.data) } },
-    release() {
-      if (!own) return;
-      if (needed > (arena?.byteLength ?? 0) && needed <= ARENA_KEEP_BYTES) arena = new SharedArrayBuffer(needed);
-      arenaBusy = false;
-    },
-  };
 }

@@ -71,18 +71,19 @@ export async function renderPrintFile(plan: RenderPlan, options: PrintRenderOpti
     }
     return p;
   };
+  // ops whose pixels are ready (or failed): while the next one is not, the ready ones are drawn
+  const settled = new Set<number>();
   const prepared = new Map<number, Promise<PreparedMotif>>();
   const preparedMotif = (i: number, op: MotifDrawOp) => {
     let p = prepared.get(i);
     if (!p) {
-      p = quiet(motifSource(op).then((px) => prepareMotif(px, op)));
+      p = quiet(motifSource(op).then((px) => prepareMotif(px, op)).finally(() => settled.add(i)));
       prepared.set(i, p);
     }
     return p;
   };
   // Text is rasterised by librsvg on sharp's threads: all of it starts at once.
   const texts = new Map<number, Promise<RgbaImage | null>>();
-  const settled = new Set<number>();
   plan.ops.forEach((op, i) => {
     if (op.kind === 'text' && options.drawText) texts.set(i, quiet(options.drawText(op, clipOf(op.clip, whole))).finally(() => settled.add(i)));
   });
@@ -92,37 +93,44 @@ export async function renderPrintFile(plan: RenderPlan, options: PrintRenderOpti
   // band by band at the end, each band going to the PNG encoder once final. The draw threads
   // (draw-threads.ts), on a machine with cores to spare, share the bands.
   const drawing = startDrawing(canvas);
-  for (let i = 0; i < plan.ops.length; i++) {
-    for (let k = i; k < Math.min(plan.ops.length, i + LOAD_AHEAD + 1); k++) {
-      const ahead = plan.ops[k];
-      if (ahead.kind === 'motif' && !prepared.has(k)) void preparedMotif(k, ahead).then(() => settled.add(k), () => settled.add(k));
-    }
-    const op = plan.ops[i];
-    const composite = { blendMode: op.blendMode, opacity: op.opacity };
-    if (op.kind === 'motif') {
-      if (!settled.has(i)) drawing.drawQueued();
-      drawing.add({ kind: 'motif', motif: await preparedMotif(i, op), clip: clipOf(op.clip, whole), composite });
-      prepared.delete(i);
-    } else if (options.drawText) {
-      if (!settled.has(i)) drawing.drawQueued();
-      const image = await texts.get(i)!;
-      if (image) drawing.add({ kind: 'image', image, composite });
-    } else {
-      notes.push({ placementId: op.placementId, code: 'render.text_skipped', message: 'Text is not drawn into print files yet; convert it to a motif' });
-    }
-    await options.onProgress?.(((i + 1) / plan.ops.length) * DRAWN_SHARE);
-  }
   const output = options.encode;
   const png = output && streamsWhileDrawing(output) ? createPngStream({ width, height, dpi: output.dpi }) : null;
   try {
+    await drawOps();
     await drawing.finish(png ? (top, bottom) => png.writeRows(canvas.data.subarray(top * width * 4, bottom * width * 4)) : undefined);
   } catch (error) {
+    // a source that failed to load, or a band that failed to draw: the draw threads drop this
+    // render and its shared copies are freed
+    drawing.cancel();
     png?.abort();
     throw error;
   }
   const encoded = png ? { buffer: await png.finish(), contentType: 'image/png' as const, extension: 'png' as const } : output ? await encodePrintFile(canvas, output) : undefined;
   await options.onProgress?.(1);
   return { image: canvas, notes, ...(encoded ? { encoded } : {}) };
+
+  async function drawOps(): Promise<void> {
+    for (let i = 0; i < plan.ops.length; i++) {
+      for (let k = i; k < Math.min(plan.ops.length, i + LOAD_AHEAD + 1); k++) {
+        const ahead = plan.ops[k];
+        if (ahead.kind === 'motif') void preparedMotif(k, ahead);
+      }
+      const op = plan.ops[i];
+      const composite = { blendMode: op.blendMode, opacity: op.opacity };
+      if (op.kind === 'motif') {
+        if (!settled.has(i)) drawing.drawQueued();
+        drawing.add({ kind: 'motif', motif: await preparedMotif(i, op), clip: clipOf(op.clip, whole), composite });
+        prepared.delete(i);
+      } else if (options.drawText) {
+        if (!settled.has(i)) drawing.drawQueued();
+        const image = await texts.get(i)!;
+        if (image) drawing.add({ kind: 'image', image, composite });
+      } else {
+        notes.push({ placementId: op.placementId, code: 'render.text_skipped', message: 'Text is not drawn into print files yet; convert it to a motif' });
+      }
+      await options.onProgress?.(((i + 1) / plan.ops.length) * DRAWN_SHARE);
+    }
+  }
 }
 
 const clipOf = (clip: Rect | null, whole: Rect) => (clip ? intersect(clip, whole) : whole);

@@ -64,7 +64,6 @@ export async function unpackSvg(file: Buffer, ctx: UnpackContext): Promise<Unpac
   if (/<text[\s>]/.test(clean.svg)) result.report.notes.push('The drawing has live text, drawn with the fonts this server has, which may differ from yours; turn text into outlines before exporting for an exact look');
   if (ppi < PRINT_PPI) result.report.notes.push(`Drawn at ${ppi} ppi, not ${PRINT_PPI}, to stay within this server's pixel limits`);
   if (clean.removed.length) result.report.leftOut = clean.removed;
-  result.document.colourMode = 'RGB';
   return result;
 }
 

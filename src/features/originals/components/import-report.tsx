@@ -28,6 +28,16 @@ function PathList({ items }: { items: { key: string; path: string; detail: React
   );
 }
 
+function TextList({ lines }: { lines: string[] }) {
+  return (
+    <ul className="list-disc pl-5 text-ink">
+      {lines.map((line, i) => (
+        <li key={i}>{line}</li>
+      ))}
+    </ul>
+  );
+}
+
 const motifLink = (id: string, text: ReactNode) => (
   <Link to={`/library/${id}`} className="text-tide-deep underline">
     {text}
@@ -112,11 +122,7 @@ export function ImportReport({ report }: { report: ImportReportDto }) {
         title="Left out for safety"
         explain="Parts of the drawing that could run code or fetch files from elsewhere were removed before it was drawn. The stored file is unchanged."
       >
-        <ul className="list-disc pl-5 text-ink">
-          {report.leftOut.map((what, i) => (
-            <li key={i}>{what}</li>
-          ))}
-        </ul>
+        <TextList lines={report.leftOut} />
       </ReportSection>,
     );
   }
@@ -128,11 +134,7 @@ export function ImportReport({ report }: { report: ImportReportDto }) {
   if (report.notes.length > 0) {
     sections.push(
       <ReportSection key="notes" title="Notes" explain="Other things worth knowing about this import.">
-        <ul className="list-disc pl-5 text-ink">
-          {report.notes.map((note, i) => (
-            <li key={i}>{note}</li>
-          ))}
-        </ul>
+        <TextList lines={report.notes} />
       </ReportSection>,
     );
   }
