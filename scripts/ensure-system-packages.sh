@@ -1,9 +1,9 @@
 #!/usr/bin/env bash
 # Installs from Debian only the system packages that are missing.
-# Usage: ensure-system-packages.sh [postgres] [chromium] [imagemagick] [all]   (no argument = all)
+# Usage: ensure-system-packages.sh [postgres] [chromium] [imagemagick] [fontconfig] [all]   (no argument = all)
 set -euo pipefail
 
-declare -A package_of=([postgres]=postgresql-15 [chromium]=chromium [imagemagick]=imagemagick)
+declare -A package_of=([postgres]=postgresql-15 [chromium]=chromium [imagemagick]=imagemagick [fontconfig]=fontconfig)
 
 is_present() {
   case "$1" in
@@ -11,15 +11,17 @@ is_present() {
     chromium) [[ -x /usr/bin/chromium ]] ;;
     # /usr/bin on purpose: a different `convert` may come first on PATH
     imagemagick) [[ -x /usr/bin/convert ]] && /usr/bin/convert -version 2>/dev/null | grep -q ImageMagick ;;
+    # its fc-list reads back the font setup that SVG text is drawn with (tests only)
+    fontconfig) [[ -x /usr/bin/fc-list ]] ;;
   esac
 }
 
 wanted=()
 for arg in "${@:-all}"; do
   case "$arg" in
-    all) wanted+=(postgres chromium imagemagick) ;;
-    postgres | chromium | imagemagick) wanted+=("$arg") ;;
-    *) echo "ensure-system-packages: unknown '$arg' (use postgres, chromium, imagemagick or all)" >&2; exit 2 ;;
+    all) wanted+=(postgres chromium imagemagick fontconfig) ;;
+    postgres | chromium | imagemagick | fontconfig) wanted+=("$arg") ;;
+    *) echo "ensure-system-packages: unknown '$arg' (use postgres, chromium, imagemagick, fontconfig or all)" >&2; exit 2 ;;
   esac
 done
 

@@ -7,6 +7,10 @@ import { sanitiseSvg } from '../../../server/features/originals/unpack/sanitise-
 import { UnpackError } from '../../../server/features/originals/unpack/unpack-error';
 import { unpackOriginal } from '../../../server/features/originals/unpack/unpack-original';
 import { readPngRgba } from './support/pixels';
+import { readFileSync } from 'node:fs';
+import { createRequire } from 'node:module';
+import opentype from 'opentype.js';
+import { fontFamiliesNamed, liveTextNote } from '../../../server/features/originals/unpack/unpack-svg';
 
 const dir = mkdtempSync(join(tmpdir(), 'unpack-svg-'));
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
@@ -85,7 +89,7 @@ describe('SVG drawings', () => {
     expect(result.motifs[0].name).toBe('Lantern <walk> & "kite"');
     expect(result.report.notes.some((n) => /live text/.test(n))).toBe(false);
     const withText = await unpackOriginal({ filePath: svgFile('sign.svg', '<svg xmlns="http://www.w3.org/2000/svg" width="96" height="48"><text x="4" y="30">Tide</text></svg>'), outDir: mkdtempSync(join(dir, 'out-')), cut: 'groups' });
-    expect(withText.report.notes.some((n) => /live text, drawn with the fonts this server has/.test(n))).toBe(true);
+    expect(withText.report.notes).toContain("The drawing's live text names no typeface and is drawn in Source Sans 3; turn text into outlines before exporting for an exact look");
     const png = await readPngRgba(join(out, result.motifs[0].pngFile));
     const mid = ((png.height >> 1) * png.width + (png.width >> 1)) * 4;
     expect(Array.from(png.data.subarray(mid, mid + 4))).toEqual([0xc0, 0x39, 0x2b, 255]);
@@ -107,5 +111,45 @@ describe('SVG drawings', () => {
     expect(result.document.width * result.document.height).toBeLessThanOrEqual(2_000_000);
     expect(result.document.ppi).toBeLessThan(300);
     expect(result.report.notes.some((n) => /not 300, to stay within/.test(n))).toBe(true);
+  });
+
+  it('draws live text in the typefaces the app ships, as wide as their own outlines say', async () => {
+    // opentype.js (from npm) reads the shipped WOFF files independently of the renderer: the
+    // ink of "Lantern Quay" at 40 px, scaled to 300 ppi, is the width the motif must have
+    const require = createRequire(import.meta.url);
+    const inkWidth = (pkg: string, file: string) => {
+      const bytes = readFileSync(require.resolve(`${pkg}/files/${file}`));
+      const font = opentype.parse(bytes.buffer.slice(bytes.byteOffset, bytes.byteOffset + bytes.byteLength));
+      const box = font.getPath('Lantern Quay', 0, 0, 40).getBoundingBox();
+      return (box.x2 - box.x1) * (300 / 96);
+    };
+    const drawn = async (family: string) => {
+      const file = svgFile(`sign-${family}.svg`, `<svg xmlns="http://www.w3.org/2000/svg" width="384" height="96"><text x="8" y="60" font-family="${family}" font-size="40" fill="#1d3b5a">Lantern Quay</text></svg>`);
+      return unpackOriginal({ filePath: file, outDir: mkdtempSync(join(dir, 'out-')), cut: 'groups' });
+    };
+    const caveat = await drawn('Caveat');
+    const sans = await drawn("'Source Sans 3', sans-serif");
+    const expectedCaveat = inkWidth('@fontsource/caveat', 'caveat-latin-600-normal.woff');
+    const expectedSans = inkWidth('@fontsource/source-sans-3', 'source-sans-3-latin-400-normal.woff');
+    // the two typefaces differ by far more than the tolerance, so the check tells them apart
+    expect(Math.abs(expectedCaveat - expectedSans) / expectedSans).toBeGreaterThan(0.1);
+    expect(Math.abs(caveat.motifs[0].width - expectedCaveat) / expectedCaveat).toBeLessThan(0.03);
+    expect(Math.abs(sans.motifs[0].width - expectedSans) / expectedSans).toBeLessThan(0.03);
+    expect(caveat.report.notes).toContain(`The drawing's live text is drawn in this app's own "Caveat"; weights the app does not ship take the nearest one, so turn text into outlines before exporting for an exact look`);
+    // a typeface the app does not have falls back to Source Sans 3, and the report names it
+    const other = await drawn('Harbour Grotesk');
+    expect(Math.abs(other.motifs[0].width - expectedSans) / expectedSans).toBeLessThan(0.03);
+    expect(other.report.notes.some((n) => n.startsWith(`The drawing's live text asks for "Harbour Grotesk", which this app does not have`))).toBe(true);
+  });
+
+  it('reads the typefaces a drawing names from attributes and CSS, without generic families', () => {
+    const svg = `<svg><style>.t { font-family: "Harbour Grotesk", Fraunces, serif; }</style>
+      <text font-family="'Caveat'">a</text><text style="font-size:3px;font-family:Pacifico,cursive">b</text>
+      <text font-family="caveat, \u0007x">c</text></svg>`;
+    expect(fontFamiliesNamed(svg).sort()).toEqual(['Caveat', 'Fraunces', 'Harbour Grotesk', 'Pacifico', 'x']);
+    expect(fontFamiliesNamed('<svg><text>plain</text></svg>')).toEqual([]);
+    const many = ['A1', 'B2', 'C3', 'D4'];
+    expect(liveTextNote(many, true)).toMatch(/asks for "A1", "B2", "C3" and 1 more, which this app does not have/);
+    expect(liveTextNote(['Fraunces'], false)).toMatch(/drawn with the fonts this server has/);
   });
 });

@@ -113,6 +113,10 @@ describe('original page', () => {
     expect(screen.queryByText('Cut')).toBeNull();
     expect(screen.queryByRole('button', { name: 'Cut again…' })).toBeNull();
     expect(screen.getByRole('link', { name: 'Upload a new version' })).toBeTruthy();
+    // the report and motif list speak of the picture, not of layers
+    expect(screen.getByText('How the file was read, and what was left out.')).toBeTruthy();
+    expect(screen.queryByText('What became of each layer in the file.')).toBeNull();
+    expect(screen.queryByText(/in the order of its layers/)).toBeNull();
   });
 
   it('gives an owner re-cut, new version and delete; a reviewer none of them', async () => {

@@ -89,12 +89,12 @@ export function OriginalPage() {
         </Card>
         {!ready && <ImportProgress original={data} canImport={canImport} onDeleted={gone} />}
         {data.report && (
-          <Card title="Import report" description="What became of each layer in the file.">
+          <Card title="Import report" description={isLayered(data) ? 'What became of each layer in the file.' : 'How the file was read, and what was left out.'}>
             <ImportReport report={data.report} />
           </Card>
         )}
         {ready && (
-          <Card title="Motifs" description={`${data.motifs.length} cut from this original, in the order of its layers.`}>
+          <Card title="Motifs" description={isLayered(data) ? `${data.motifs.length} cut from this original, in the order of its layers.` : data.motifs.length > 0 ? 'The whole picture is one motif.' : 'The picture has no visible pixels, so it gave no motif.'}>
             <OriginalMotifs motifs={data.motifs} />
           </Card>
         )}
