@@ -57,6 +57,8 @@ export type ImportOutcome = 'imported' | 'skipped' | 'failed';
 // The unpacker reports its own 0–100 across its phases (reading, cutting while encodes run,
 // finishing); that is the first 80 % of the whole import, storing 80–95 %, the commit the rest.
 const UNPACK_SHARE = 80;
+// A worker that fetches the stored file first shows that as the start of "reading", by bytes.
+const DOWNLOAD_SHARE = 10;
 
 function throttled(fn: (phase: UnpackProgress['phase'], percent: number) => void, ms = 250) {
   let last = 0;
@@ -150,7 +152,9 @@ export function createOriginalImporter({ db, repo, storage, runUnpack, earlyUnpa
     const outDir = early ? early.outDir : path.join(workDir!, 'out');
     const claimMs = lap();
     const writeProgress = progressWriter((phase, percent) => repo.setProgress(originalId, phase, percent));
-    const progress = throttled((phase, percent) => writeProgress(phase, (UNPACK_SHARE * Math.min(100, Math.max(0, percent))) / 100));
+    // the unpack's 0–100 fills what the download (when there is one) left of UNPACK_SHARE
+    let unpackFrom = 0;
+    const progress = throttled((phase, percent) => writeProgress(phase, unpackFrom + ((UNPACK_SHARE - unpackFrom) * Math.min(100, Math.max(0, percent))) / 100));
     const uploads = createMotifUploads({
       storage, studioId: original.studioId, outDir, concurrency: UPLOAD_CONCURRENCY,
       studioHasPixels: (hash) => studioHasPixels(original.studioId, hash),
@@ -164,8 +168,9 @@ export function createOriginalImporter({ db, repo, storage, runUnpack, earlyUnpa
         result = await early.follow(progress, (m) => uploads.early(m));
       } else {
         const filePath = path.join(workDir!, 'original');
-        await downloadOriginal(original.storageKey, filePath, outDir);
+        await downloadOriginal(original.storageKey, filePath, outDir, throttled((_, percent) => writeProgress('reading', (DOWNLOAD_SHARE * percent) / 100)));
         downloadMs = lap();
+        unpackFrom = DOWNLOAD_SHARE;
         result = await runUnpack({ filePath, outDir, cut: original.cut, originalName: original.name }, progress, (m) => uploads.early(m));
       }
       const unpackMs = lap();
@@ -231,9 +236,17 @@ export function createOriginalImporter({ db, repo, storage, runUnpack, earlyUnpa
     }
   };
 
-  async function downloadOriginal(key: string, filePath: string, outDir: string): Promise<void> {
+  async function downloadOriginal(key: string, filePath: string, outDir: string, onProgress: (p: UnpackProgress) => void): Promise<void> {
     const [stored] = await Promise.all([storage.get(key), mkdir(outDir)]);
-    await pipeline(stored.body, createWriteStream(filePath));
+    const total = stored.contentLength;
+    let received = 0;
+    await pipeline(stored.body, async function* counted(source: AsyncIterable<Buffer>) {
+      for await (const chunk of source) {
+        received += chunk.length;
+        if (total) onProgress({ phase: 'reading', percent: Math.min(100, (100 * received) / total) });
+        yield chunk;
+      }
+    }, createWriteStream(filePath));
   }
 }
 

@@ -6,6 +6,7 @@ import { UnpackError } from '../../../server/features/originals/unpack/unpack-er
 import { mkdtemp, writeFile } from 'node:fs/promises';
 import os from 'node:os';
 import path from 'node:path';
+import { Readable } from 'node:stream';
 import { createOriginalsCleanup } from '../../../server/features/originals/originals-cleanup';
 import { createOriginalsService } from '../../../server/features/originals/originals.service';
 import { createTestApp, signUpOwner, type ApiClient, type TestApp } from '../support/test-app';
@@ -93,5 +94,42 @@ describe('an import interrupted halfway', () => {
     expect(await t.runtime.storage.list(`studios/${studioId}/motifs/`)).toEqual(before);
     // the original itself is kept, to retry or delete
     expect(await t.runtime.storage.exists(`studios/${studioId}/originals/${id}/file`)).toBe(true);
+  }, 60_000);
+
+  it('shows the download of the stored file as the start of reading, by bytes, before the unpack goes on from there', async () => {
+    const repo = createOriginalsRepository(t.runtime.db.db);
+    const service = createOriginalsService({ repo, storage: t.runtime.storage, queue: { enqueueImport: async () => {} }, cleanup: createOriginalsCleanup(t.runtime.db.db, t.runtime.storage) });
+    const dir = await mkdtemp(path.join(os.tmpdir(), 'atomic-'));
+    const file = path.join(dir, 'slow-fetch.psd');
+    const psd = smallCardPsd({ kiteColour: [42, 200, 42, 255] });
+    await writeFile(file, psd);
+    const { id } = await service.upload({ studioId, userId, filePath: file, fileName: 'slow-fetch.psd', byteSize: psd.length, cut: 'groups' });
+    // a storage that hands the file over in 8 parts, 120 ms apart, as a far bucket would
+    const slowStorage = { ...t.runtime.storage, get: async (key: string) => {
+      const bytes = await t.runtime.storage.getBuffer(key);
+      const part = Math.ceil(bytes.length / 8);
+      async function* parts() {
+        for (let at = 0; at < bytes.length; at += part) {
+          await new Promise((r) => setTimeout(r, 120));
+          yield bytes.subarray(at, at + part);
+        }
+      }
+      return { body: Readable.from(parts()), contentLength: bytes.length };
+    } };
+    const written: [string, number][] = [];
+    const watchedRepo = { ...repo, setProgress: async (originalId: string, phase: Parameters<typeof repo.setProgress>[1], percent: number) => {
+      if (originalId === id) written.push([phase, percent]);
+      return repo.setProgress(originalId, phase, percent);
+    } };
+    const importer = createOriginalImporter({ db: t.runtime.db.db, repo: watchedRepo, storage: slowStorage, runUnpack: runUnpack as RunUnpack });
+    expect(await importer(id)).toBe('imported');
+    const percents = written.map(([, percent]) => percent);
+    // never backwards; several steps within the download's first 10 %, then the unpack above it
+    expect(percents).toEqual([...percents].sort((a, b) => a - b));
+    const fetching = written.filter(([phase, percent]) => phase === 'reading' && percent <= 10);
+    expect(fetching.length).toBeGreaterThanOrEqual(3);
+    expect(fetching.some(([, percent]) => percent > 0 && percent < 10)).toBe(true);
+    expect(written.filter(([phase]) => phase === 'cutting').every(([, percent]) => percent >= 10)).toBe(true);
+    expect((await owner.get(`/api/originals/${id}`)).body.status).toBe('ready');
   }, 60_000);
 });
