@@ -89,7 +89,7 @@ describe('SVG drawings', () => {
     expect(result.motifs[0].name).toBe('Lantern <walk> & "kite"');
     expect(result.report.notes.some((n) => /live text/.test(n))).toBe(false);
     const withText = await unpackOriginal({ filePath: svgFile('sign.svg', '<svg xmlns="http://www.w3.org/2000/svg" width="96" height="48"><text x="4" y="30">Tide</text></svg>'), outDir: mkdtempSync(join(dir, 'out-')), cut: 'groups' });
-    expect(withText.report.notes).toContain("The drawing's live text names no typeface and is drawn in Source Sans 3; turn text into outlines before exporting for an exact look");
+    expect(withText.report.notes).toContain("The drawing's live text names no typeface and is drawn in Source Sans 3. To keep the lettering exact, turn text into outlines before exporting.");
     const png = await readPngRgba(join(out, result.motifs[0].pngFile));
     const mid = ((png.height >> 1) * png.width + (png.width >> 1)) * 4;
     expect(Array.from(png.data.subarray(mid, mid + 4))).toEqual([0xc0, 0x39, 0x2b, 255]);
@@ -135,7 +135,7 @@ describe('SVG drawings', () => {
     expect(Math.abs(expectedCaveat - expectedSans) / expectedSans).toBeGreaterThan(0.1);
     expect(Math.abs(caveat.motifs[0].width - expectedCaveat) / expectedCaveat).toBeLessThan(0.03);
     expect(Math.abs(sans.motifs[0].width - expectedSans) / expectedSans).toBeLessThan(0.03);
-    expect(caveat.report.notes).toContain(`The drawing's live text is drawn in this app's own "Caveat"; weights the app does not ship take the nearest one, so turn text into outlines before exporting for an exact look`);
+    expect(caveat.report.notes).toContain(`The drawing's live text is drawn in this app's own "Caveat"; a weight the app does not ship takes the nearest one. To keep the lettering exact, turn text into outlines before exporting.`);
     // a typeface the app does not have falls back to Source Sans 3, and the report names it
     const other = await drawn('Harbour Grotesk');
     expect(Math.abs(other.motifs[0].width - expectedSans) / expectedSans).toBeLessThan(0.03);

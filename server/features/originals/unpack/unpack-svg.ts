@@ -94,17 +94,18 @@ export function fontFamiliesNamed(svg: string): string[] {
 
 // librsvg draws live text with the app's own typefaces (svg-font-config.ts) or this server's.
 export function liveTextNote(families: string[], fontsReady: boolean): string {
-  const exact = 'turn text into outlines before exporting for an exact look';
-  if (!fontsReady) return `The drawing has live text, drawn with the fonts this server has, which may differ from yours; ${exact}`;
+  const exact = 'To keep the lettering exact, turn text into outlines before exporting.';
+  if (!fontsReady) return `The drawing has live text, drawn with the fonts this server has, which may differ from yours. ${exact}`;
   const shipped = new Set(shippedFonts.map((f) => f.name.toLowerCase()));
   const missing = families.filter((name) => !shipped.has(name.toLowerCase()));
   const present = families.filter((name) => shipped.has(name.toLowerCase()));
   const list = (names: string[]) => names.map((n) => `"${n}"`).join(', ');
   if (missing.length > 0) {
-    return `The drawing's live text asks for ${list(missing.slice(0, 3))}${missing.length > 3 ? ` and ${missing.length - 3} more` : ''}, which this app does not have; that text is drawn in ${shippedFonts[0].name} or the nearest font on this server. To keep the lettering, ${exact}`;
+    const more = missing.length > 3 ? ` and ${missing.length - 3} more` : '';
+    return `The drawing's live text asks for ${list(missing.slice(0, 3))}${more}, which this app does not have, so that text is drawn in ${shippedFonts[0].name} (or the closest font on this server). ${exact}`;
   }
-  if (present.length > 0) return `The drawing's live text is drawn in this app's own ${list(present)}; weights the app does not ship take the nearest one, so ${exact}`;
-  return `The drawing's live text names no typeface and is drawn in ${shippedFonts[0].name}; ${exact}`;
+  if (present.length > 0) return `The drawing's live text is drawn in this app's own ${list(present)}; a weight the app does not ship takes the nearest one. ${exact}`;
+  return `The drawing's live text names no typeface and is drawn in ${shippedFonts[0].name}. ${exact}`;
 }
 
 async function sizeOf(svg: Buffer): Promise<{ width: number; height: number }> {

@@ -17,7 +17,7 @@ const kindWords: Record<MotifDetail['kind'], string> = {
   group: 'A layer group, flattened',
   layer: 'One layer',
   text: 'A text layer',
-  image: 'A flat image',
+  image: 'A whole flat image or drawing',
 };
 
 // Pixel size and the largest print it makes without enlarging (the server's figures, or the same
@@ -40,11 +40,11 @@ export function MotifFacts({ motif }: { motif: MotifDetail }) {
           {original.name}
         </Link>
       </Fact>
-      <Fact term="Layer path">{displaySourcePath(original.sourcePath)}</Fact>
+      {motif.kind !== 'image' && <Fact term="Layer path">{displaySourcePath(original.sourcePath)}</Fact>}
       <Fact term="Place in the original">
         {original.offsetX}, {original.offsetY} px from the top left
         {original.width && original.height ? ` of ${original.width} × ${original.height} px` : ''}
-        {original.position !== null ? `; number ${original.position + 1} in its layer order` : ''}
+        {original.position !== null && motif.kind !== 'image' ? `; number ${original.position + 1} in its layer order` : ''}
       </Fact>
       <Fact term="Kind">
         {kindWords[motif.kind]}

@@ -92,6 +92,21 @@ describe('motif page', () => {
     expect(screen.getByText('No product uses this motif yet')).toBeTruthy();
   });
 
+  it('names a layer motif by its layer path and order, and a whole picture without either', async () => {
+    fakeApi(routes(fox));
+    const layered = open('reviewer');
+    await screen.findByRole('heading', { name: 'Fox with Lantern' });
+    expect(screen.getByText('Layer path')).toBeTruthy();
+    expect(screen.getByText(/in its layer order/)).toBeTruthy();
+    layered.unmount();
+    fakeApi(routes({ ...fox, kind: 'image' }));
+    open('reviewer');
+    await screen.findByRole('heading', { name: 'Fox with Lantern' });
+    expect(screen.getByText('A whole flat image or drawing')).toBeTruthy();
+    expect(screen.queryByText('Layer path')).toBeNull();
+    expect(screen.queryByText(/in its layer order/)).toBeNull();
+  });
+
   it('gives a reviewer no editing controls, only the download', async () => {
     fakeApi(routes(fox));
     open('reviewer');

@@ -45,21 +45,24 @@ const motifLink = (id: string, text: ReactNode) => (
 );
 
 // What the import did with each layer, in plain words; every layer it did not turn into a
-// motif of its own is named with the reason.
-export function ImportReport({ report }: { report: ImportReportDto }) {
+// motif of its own is named with the reason. A flat image or drawing (`layered` false) is one
+// picture, and the words say so.
+export function ImportReport({ report, layered = true }: { report: ImportReportDto; layered?: boolean }) {
   const sections: ReactNode[] = [];
   sections.push(
     <ReportSection
       key="created"
       title={report.created === 0 ? 'No new motifs' : `${plural(report.created, 'new motif', 'new motifs')} created`}
-      explain={report.created === 0 ? 'Everything in this file was already in the library.' : 'Layers and groups that were not in the library before.'}
+      explain={report.created === 0
+        ? (layered ? 'Everything in this file was already in the library.' : 'This picture was already in the library.')
+        : (layered ? 'Layers and groups that were not in the library before.' : 'The picture was not in the library before.')}
     />,
   );
   if (report.linkedExisting.length > 0) {
     sections.push(
       <ReportSection
         key="linked"
-        title={`${plural(report.linkedExisting.length, 'layer matches', 'layers match')} a motif already in the library`}
+        title={layered ? `${plural(report.linkedExisting.length, 'layer matches', 'layers match')} a motif already in the library` : 'The picture matches a motif already in the library'}
         explain="Exactly the same pixels were already in the studio, so the original now points at that motif instead of making a copy."
       >
         <PathList items={report.linkedExisting.map((l) => ({ key: l.sourcePath, path: l.sourcePath, detail: <>same as {motifLink(l.motifId, l.motifName)}</> }))} />
@@ -71,7 +74,7 @@ export function ImportReport({ report }: { report: ImportReportDto }) {
       <ReportSection
         key="versions"
         title={`${plural(report.newVersions.length, 'motif has', 'motifs have')} a new version`}
-        explain="These layers changed since the earlier original. Older versions stay readable, and products keep the version they use until someone updates them."
+        explain={`${layered ? 'These layers' : 'The picture'} changed since the earlier original. Older versions stay readable, and products keep the version they use until someone updates them.`}
       >
         <PathList items={report.newVersions.map((v) => ({ key: v.sourcePath, path: v.sourcePath, detail: motifLink(v.motifId, `now version ${v.version}`) }))} />
       </ReportSection>,
@@ -82,7 +85,7 @@ export function ImportReport({ report }: { report: ImportReportDto }) {
       <ReportSection
         key="unchanged"
         title={`${plural(report.unchanged.length, 'motif is', 'motifs are')} unchanged`}
-        explain="Same layer, same pixels as in the earlier original; nothing new was stored."
+        explain={layered ? 'Same layer, same pixels as in the earlier original; nothing new was stored.' : 'The same pixels as in the earlier original; nothing new was stored.'}
       />,
     );
   }
@@ -128,7 +131,11 @@ export function ImportReport({ report }: { report: ImportReportDto }) {
   }
   if (report.skipped.length === 0 && report.unsupported.length === 0 && report.leftOut.length === 0) {
     sections.push(
-      <ReportSection key="complete" title="Nothing left out" explain="Every layer with pixels became part of a motif, and everything in the file could be drawn." />,
+      <ReportSection
+        key="complete"
+        title="Nothing left out"
+        explain={layered ? 'Every layer with pixels became part of a motif, and everything in the file could be drawn.' : 'Everything in the file could be drawn.'}
+      />,
     );
   }
   if (report.notes.length > 0) {

@@ -117,6 +117,7 @@ describe('original page', () => {
     expect(screen.getByText('How the file was read, and what was left out.')).toBeTruthy();
     expect(screen.queryByText('What became of each layer in the file.')).toBeNull();
     expect(screen.queryByText(/in the order of its layers/)).toBeNull();
+    expect(screen.queryByText(/Layers and groups|Every layer with pixels/)).toBeNull();
   });
 
   it('gives an owner re-cut, new version and delete; a reviewer none of them', async () => {

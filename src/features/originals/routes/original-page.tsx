@@ -90,7 +90,7 @@ export function OriginalPage() {
         {!ready && <ImportProgress original={data} canImport={canImport} onDeleted={gone} />}
         {data.report && (
           <Card title="Import report" description={isLayered(data) ? 'What became of each layer in the file.' : 'How the file was read, and what was left out.'}>
-            <ImportReport report={data.report} />
+            <ImportReport report={data.report} layered={isLayered(data)} />
           </Card>
         )}
         {ready && (
