@@ -1,5 +1,5 @@
 import { execFileSync } from 'node:child_process';
-import { existsSync, mkdtempSync, readFileSync, rmSync, statSync } from 'node:fs';
+import { chmodSync, existsSync, mkdirSync, mkdtempSync, readFileSync, rmSync, statSync, writeFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
@@ -56,5 +56,16 @@ describe('fonts for drawing SVG text', () => {
     expect(statSync(first).mtimeMs).toBe(built);
     // no staging folders are left behind
     expect(execFileSync('ls', [parent]).toString().split('\n').filter((n) => n.includes('building'))).toEqual([]);
+  });
+
+  it('does not use a folder of that name that others may write to, and builds a private one instead', async () => {
+    const root = path.join(parent, 'd');
+    mkdirSync(root, { mode: 0o777 });
+    chmodSync(root, 0o777);
+    writeFileSync(path.join(root, 'fonts.conf'), '<fontconfig><dir>/somewhere/else</dir></fontconfig>');
+    const config = await ensureSvgFontConfig(root);
+    expect(config).not.toBe(path.join(root, 'fonts.conf'));
+    expect(readFileSync(config, 'utf8')).toContain(path.join(path.dirname(config), 'fonts'));
+    expect(statSync(path.dirname(config)).mode & 0o077).toBe(0);
   });
 });

@@ -1,5 +1,5 @@
 import { createHash } from 'node:crypto';
-import { existsSync } from 'node:fs';
+import { existsSync, statSync } from 'node:fs';
 import { mkdir, mkdtemp, readFile, rename, rm, writeFile } from 'node:fs/promises';
 import { createRequire } from 'node:module';
 import { tmpdir } from 'node:os';
@@ -74,6 +74,13 @@ export function ensureSvgFontConfig(root = defaultSvgFontRoot()): Promise<string
 
 async function build(root: string): Promise<string> {
   const config = path.join(root, 'fonts.conf');
+  if (existsSync(root) && !ownedByUs(root)) {
+    // someone else's folder under a shared temp directory is never trusted: build a private one
+    return build(await mkdtemp(`${root}-own-`).then(async (dir) => {
+      await rm(dir, { recursive: true, force: true });
+      return dir;
+    }));
+  }
   if (existsSync(config)) return config;
   await mkdir(path.dirname(root), { recursive: true });
   const staging = await mkdtemp(`${root}.building-`);
@@ -94,6 +101,12 @@ async function build(root: string): Promise<string> {
   } finally {
     await rm(staging, { recursive: true, force: true });
   }
+}
+
+// Made by this user and writable by no one else (mkdtemp makes it 0700, the rename keeps that).
+function ownedByUs(dir: string): boolean {
+  const info = statSync(dir);
+  return (process.getuid === undefined || info.uid === process.getuid()) && (info.mode & 0o022) === 0;
 }
 
 // Points this process's fontconfig at the shipped fonts, unless the operator set a file of their
