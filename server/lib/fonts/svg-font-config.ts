@@ -74,33 +74,41 @@ export function ensureSvgFontConfig(root = defaultSvgFontRoot()): Promise<string
 
 async function build(root: string): Promise<string> {
   const config = path.join(root, 'fonts.conf');
-  if (existsSync(root) && !ownedByUs(root)) {
-    // someone else's folder under a shared temp directory is never trusted: build a private one
-    return build(await mkdtemp(`${root}-own-`).then(async (dir) => {
-      await rm(dir, { recursive: true, force: true });
-      return dir;
-    }));
-  }
+  // someone else's folder under a shared temp directory is never trusted
+  if (existsSync(root) && !ownedByUs(root)) return buildPrivate(root);
   if (existsSync(config)) return config;
   await mkdir(path.dirname(root), { recursive: true });
   const staging = await mkdtemp(`${root}.building-`);
   try {
-    await mkdir(path.join(staging, 'fonts'));
-    for (const font of svgFontFiles()) {
-      const ttf = await decompress(await readFile(font.source));
-      await writeFile(path.join(staging, 'fonts', font.file), ttf);
-    }
-    await writeFile(path.join(staging, 'fonts.conf'), fontConfigText(root));
+    await writeFonts(staging, root);
     try {
       await rename(staging, root);
     } catch (error) {
-      // another process finished first: its folder is as good as ours
+      // another process finished first: its folder is as good as ours, if it is ours
       if (!existsSync(config)) throw error;
+      if (!ownedByUs(root)) return buildPrivate(root);
     }
     return config;
   } finally {
     await rm(staging, { recursive: true, force: true });
   }
+}
+
+// A folder only this process knows of (mkdtemp), used where it was made; rebuilt per process.
+async function buildPrivate(root: string): Promise<string> {
+  const dir = await mkdtemp(`${root}-own-`);
+  await writeFonts(dir, dir);
+  return path.join(dir, 'fonts.conf');
+}
+
+// The TrueType files and the config that names `root` as where they will be.
+async function writeFonts(dir: string, root: string): Promise<void> {
+  await mkdir(path.join(dir, 'fonts'));
+  for (const font of svgFontFiles()) {
+    const ttf = await decompress(await readFile(font.source));
+    await writeFile(path.join(dir, 'fonts', font.file), ttf);
+  }
+  await writeFile(path.join(dir, 'fonts.conf'), fontConfigText(root));
 }
 
 // Made by this user and writable by no one else (mkdtemp makes it 0700, the rename keeps that).

@@ -10,7 +10,7 @@ import { readPngRgba } from './support/pixels';
 import { readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import opentype from 'opentype.js';
-import { fontFamiliesNamed, liveTextNote } from '../../../server/features/originals/unpack/unpack-svg';
+import { fontFamiliesNamed, liveTextNote } from '../../../server/features/originals/unpack/svg-live-text';
 
 const dir = mkdtempSync(join(tmpdir(), 'unpack-svg-'));
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
