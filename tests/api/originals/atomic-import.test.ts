@@ -26,17 +26,21 @@ beforeAll(async () => {
 }, 60_000);
 afterAll(() => t.close());
 
+// Stored through the real upload service, but not queued: other test files run workers on the
+// shared queue, and each test here must be the only one driving the importer of its original.
+async function storedOriginal(fileName: string, kiteColour: [number, number, number, number]) {
+  const repo = createOriginalsRepository(t.runtime.db.db);
+  const service = createOriginalsService({ repo, storage: t.runtime.storage, queue: { enqueueImport: async () => {} }, cleanup: createOriginalsCleanup(t.runtime.db.db, t.runtime.storage) });
+  const file = path.join(await mkdtemp(path.join(os.tmpdir(), 'atomic-')), fileName);
+  const psd = smallCardPsd({ kiteColour });
+  await writeFile(file, psd);
+  const { id } = await service.upload({ studioId, userId, filePath: file, fileName, byteSize: psd.length, cut: 'groups' });
+  return { repo, id };
+}
+
 describe('an import interrupted halfway', () => {
   it('shows nothing of the original until a retry from the stored file commits it all at once', async () => {
-    // Stored through the real upload service, but not queued: other test files run workers on
-    // the shared queue, and this test must be the only one driving the importer.
-    const repo = createOriginalsRepository(t.runtime.db.db);
-    const service = createOriginalsService({ repo, storage: t.runtime.storage, queue: { enqueueImport: async () => {} }, cleanup: createOriginalsCleanup(t.runtime.db.db, t.runtime.storage) });
-    const dir = await mkdtemp(path.join(os.tmpdir(), 'atomic-'));
-    const file = path.join(dir, 'interrupted.psd');
-    const psd = smallCardPsd({ kiteColour: [42, 42, 200, 255] });
-    await writeFile(file, psd);
-    const { id } = await service.upload({ studioId, userId, filePath: file, fileName: 'interrupted.psd', byteSize: psd.length, cut: 'groups' });
+    const { repo, id } = await storedOriginal('interrupted.psd', [42, 42, 200, 255]);
 
     // The storage goes away after the unpack, before anything is committed.
     let puts = 0;
@@ -66,13 +70,7 @@ describe('an import interrupted halfway', () => {
   }, 60_000);
 
   it('leaves no stored motif behind when the file turns out unreadable after some motifs were stored', async () => {
-    const repo = createOriginalsRepository(t.runtime.db.db);
-    const service = createOriginalsService({ repo, storage: t.runtime.storage, queue: { enqueueImport: async () => {} }, cleanup: createOriginalsCleanup(t.runtime.db.db, t.runtime.storage) });
-    const dir = await mkdtemp(path.join(os.tmpdir(), 'atomic-'));
-    const file = path.join(dir, 'broken-late.psd');
-    const psd = smallCardPsd({ kiteColour: [200, 42, 42, 255] });
-    await writeFile(file, psd);
-    const { id } = await service.upload({ studioId, userId, filePath: file, fileName: 'broken-late.psd', byteSize: psd.length, cut: 'groups' });
+    const { repo, id } = await storedOriginal('broken-late.psd', [200, 42, 42, 255]);
     const before = await t.runtime.storage.list(`studios/${studioId}/motifs/`);
 
     // every motif announced (and stored) before a layer further on proves unreadable
@@ -97,13 +95,7 @@ describe('an import interrupted halfway', () => {
   }, 60_000);
 
   it('shows the download of the stored file as the start of reading, by bytes, before the unpack goes on from there', async () => {
-    const repo = createOriginalsRepository(t.runtime.db.db);
-    const service = createOriginalsService({ repo, storage: t.runtime.storage, queue: { enqueueImport: async () => {} }, cleanup: createOriginalsCleanup(t.runtime.db.db, t.runtime.storage) });
-    const dir = await mkdtemp(path.join(os.tmpdir(), 'atomic-'));
-    const file = path.join(dir, 'slow-fetch.psd');
-    const psd = smallCardPsd({ kiteColour: [42, 200, 42, 255] });
-    await writeFile(file, psd);
-    const { id } = await service.upload({ studioId, userId, filePath: file, fileName: 'slow-fetch.psd', byteSize: psd.length, cut: 'groups' });
+    const { repo, id } = await storedOriginal('slow-fetch.psd', [42, 200, 42, 255]);
     // a storage that hands the file over in 8 parts, 120 ms apart, as a far bucket would
     const slowStorage = { ...t.runtime.storage, get: async (key: string) => {
       const bytes = await t.runtime.storage.getBuffer(key);

@@ -94,7 +94,7 @@ export function OriginalPage() {
           </Card>
         )}
         {ready && (
-          <Card title="Motifs" description={isLayered(data) ? `${data.motifs.length} cut from this original, in the order of its layers.` : data.motifs.length > 0 ? 'The whole picture is one motif.' : 'The picture has no visible pixels, so it gave no motif.'}>
+          <Card title="Motifs" description={motifsDescription(data)}>
             <OriginalMotifs motifs={data.motifs} />
           </Card>
         )}
@@ -103,4 +103,10 @@ export function OriginalPage() {
       <DeleteOriginalDialog original={deleting ? data : null} onClose={() => setDeleting(false)} onDeleted={gone} />
     </>
   );
+}
+
+// A layered file gives a motif per layer or group; a flat image or drawing is one picture.
+function motifsDescription(original: Parameters<typeof isLayered>[0] & { motifs: unknown[] }): string {
+  if (isLayered(original)) return `${original.motifs.length} cut from this original, in the order of its layers.`;
+  return original.motifs.length > 0 ? 'The whole picture is one motif.' : 'The picture has no visible pixels, so it gave no motif.';
 }
